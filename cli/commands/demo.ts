@@ -1,0 +1,3 @@
+import { notYetAvailable } from './not-yet.js';
+
+export const demoCommand = notYetAvailable('demo', 'Run the built-in demo scenario', '--out <dir>');

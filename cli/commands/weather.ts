@@ -1,0 +1,3 @@
+import { notYetAvailable } from './not-yet.js';
+
+export const weatherCommand = notYetAvailable('weather', 'Summarise an EPW weather file', '<file.epw>');
