@@ -1,0 +1,35 @@
+/** TypeScript types of a validated scenario (defaults filled in) and of the file as written. */
+import type { z } from 'zod';
+import type { scenarioSchema } from './scenario-schema.js';
+import type { placeSchema, roomSchema, vehicleSchema, outdoorsSchema, luminaireSchema, screenSchema, spectrumRefSchema, blindsSchema, windowSchema, scheduleEntrySchema } from './places-schema.js';
+import type { personaSchema, segmentSchema, eyewearSchema, weekSchema } from './personas-schema.js';
+import type { rosterSchema, shiftSchema } from './roster-schema.js';
+import type { strategySchema, strategyChangeSchema, segmentMatchSchema, segmentPatchSchema } from './strategy-schema.js';
+import type { lightLogSpecSchema } from './light-log-schema.js';
+import type { siteSchema } from './site-schema.js';
+
+export type Scenario = z.output<typeof scenarioSchema>;
+export type ScenarioInput = z.input<typeof scenarioSchema>;
+export type Site = z.output<typeof siteSchema>;
+export type Place = z.output<typeof placeSchema>;
+export type Room = z.output<typeof roomSchema>;
+export type Vehicle = z.output<typeof vehicleSchema>;
+export type Outdoors = z.output<typeof outdoorsSchema>;
+export type Luminaire = z.output<typeof luminaireSchema>;
+export type ScheduleEntry = z.output<typeof scheduleEntrySchema>;
+export type Screen = z.output<typeof screenSchema>;
+export type SpectrumRef = z.output<typeof spectrumRefSchema>;
+export type Blinds = z.output<typeof blindsSchema>;
+export type Window = z.output<typeof windowSchema>;
+export type Persona = z.output<typeof personaSchema>;
+export type Segment = z.output<typeof segmentSchema>;
+export type SegmentInput = z.input<typeof segmentSchema>;
+export type Week = z.output<typeof weekSchema>;
+export type Eyewear = z.output<typeof eyewearSchema>;
+export type Roster = z.output<typeof rosterSchema>;
+export type Shift = z.output<typeof shiftSchema>;
+export type Strategy = z.output<typeof strategySchema>;
+export type StrategyChange = z.output<typeof strategyChangeSchema>;
+export type SegmentMatch = z.output<typeof segmentMatchSchema>;
+export type SegmentPatch = z.output<typeof segmentPatchSchema>;
+export type LightLogSpec = z.output<typeof lightLogSpecSchema>;

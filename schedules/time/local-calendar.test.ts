@@ -1,0 +1,58 @@
+import { describe, expect, it } from 'vitest';
+import { DateTime } from 'luxon';
+import { addDays, daysBetween, isoWeekday, wallTimeToUtc_ms, utcToWallTime } from './local-calendar.js';
+
+// Transition dates: EU summer time starts on the last Sunday of March at 01:00 UTC and ends on
+// the last Sunday of October at 01:00 UTC (Directive 2000/84/EC, Art. 2–3); in 2026 those are
+// 29 March and 25 October. US DST 2026: 8 March and 1 November at 02:00 local (15 U.S.C. § 260a).
+describe('wall time to real time across daylight-saving transitions', () => {
+  it('maps an ordinary wall time exactly as the time-zone rules say (cross-check: luxon DateTime)', () => {
+    const t = wallTimeToUtc_ms('Europe/Berlin', '2026-06-15', 9 * 60 + 30);
+    expect(t).toBe(DateTime.fromISO('2026-06-15T09:30', { zone: 'Europe/Berlin' }).toMillis());
+    expect(new Date(t).toISOString()).toBe('2026-06-15T07:30:00.000Z');
+  });
+  it('makes the spring-forward day 23 h long and maps the skipped hour to the transition', () => {
+    const midnight = wallTimeToUtc_ms('Europe/Berlin', '2026-03-29', 0);
+    const next = wallTimeToUtc_ms('Europe/Berlin', '2026-03-30', 0);
+    expect((next - midnight) / 3_600_000).toBe(23);
+    const skipped = wallTimeToUtc_ms('Europe/Berlin', '2026-03-29', 2 * 60 + 30);
+    expect(new Date(skipped).toISOString()).toBe('2026-03-29T01:00:00.000Z');
+  });
+  it('makes the fall-back day 25 h long and maps the repeated hour to its first occurrence', () => {
+    const midnight = wallTimeToUtc_ms('Europe/Berlin', '2026-10-25', 0);
+    const next = wallTimeToUtc_ms('Europe/Berlin', '2026-10-26', 0);
+    expect((next - midnight) / 3_600_000).toBe(25);
+    const repeated = wallTimeToUtc_ms('Europe/Berlin', '2026-10-25', 2 * 60 + 30);
+    expect(new Date(repeated).toISOString()).toBe('2026-10-25T00:30:00.000Z');
+  });
+  it('handles the US transitions at 02:00 local', () => {
+    const a = wallTimeToUtc_ms('America/New_York', '2026-03-08', 0);
+    const b = wallTimeToUtc_ms('America/New_York', '2026-03-09', 0);
+    expect((b - a) / 3_600_000).toBe(23);
+    const c = wallTimeToUtc_ms('America/New_York', '2026-11-01', 0);
+    const d = wallTimeToUtc_ms('America/New_York', '2026-11-02', 0);
+    expect((d - c) / 3_600_000).toBe(25);
+  });
+  it('is monotonic minute by minute through both transitions', () => {
+    for (const date of ['2026-03-29', '2026-10-25']) {
+      let prev = -Infinity;
+      for (let m = 0; m <= 1440; m++) {
+        const t = wallTimeToUtc_ms('Europe/Berlin', date, m);
+        expect(t).toBeGreaterThanOrEqual(prev);
+        prev = t;
+      }
+    }
+  });
+  it('round-trips real time to wall time', () => {
+    const t = Date.UTC(2026, 0, 5, 12, 0);
+    expect(utcToWallTime('Europe/Berlin', t)).toEqual({ date: '2026-01-05', minuteOfDay: 13 * 60, weekday: 1 });
+  });
+});
+
+describe('calendar arithmetic', () => {
+  it('counts days and weekdays (2026-01-05 is a Monday — common calendar fact)', () => {
+    expect(isoWeekday('2026-01-05')).toBe(1);
+    expect(addDays('2026-02-27', 2)).toBe('2026-03-01');
+    expect(daysBetween('2026-01-01', '2027-01-01')).toBe(365);
+  });
+});
