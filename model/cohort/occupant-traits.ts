@@ -1,0 +1,53 @@
+/**
+ * What a virtual occupant inherits from a persona and how far the cohort lets it vary.
+ * How each trait enters the pipeline:
+ *  - intrinsicPeriod_h: the oscillator's τ (model/circadian), hours.
+ *  - lightSensitivityMultiplier: multiplies the light input of the circadian and melatonin
+ *    models (the photopic lux of the calibration source, or melanopic EDI) before Process L,
+ *    I_eff = m · I. 1 = the persona's own sensitivity. Equivalent to dividing that person's ED50 by m.
+ *  - age_years: lens transmission in the light-at-the-eye step.
+ *  - habitualMidSleepShift_h: added to every habitual sleep and wake time of the persona's routine
+ *    (positive = later), sleep duration unchanged.
+ */
+import { HABITUAL_MID_SLEEP_SD_H, INTRINSIC_PERIOD_SD_H, LIGHT_SENSITIVITY_SD_LN } from './population-spread.js';
+
+/** The persona's own values: the centre of its cohort. */
+export interface PersonaTraits {
+  intrinsicPeriod_h: number;
+  /** 1 = typical; > 1 more sensitive to light. */
+  lightSensitivityMultiplier: number;
+  age_years: number;
+}
+
+/** Between-occupant spread of a cohort. All zero / null = every occupant is the persona. */
+export interface CohortSpread {
+  intrinsicPeriodSd_h: number;
+  /** SD of ln(light sensitivity multiplier). */
+  lightSensitivitySdLn: number;
+  /** Ages drawn uniformly in [min, max]; null keeps the persona's age. */
+  ageRange_years: readonly [number, number] | null;
+  habitualMidSleepSd_h: number;
+}
+
+export interface OccupantTraits {
+  occupantIndex: number;
+  intrinsicPeriod_h: number;
+  lightSensitivityMultiplier: number;
+  age_years: number;
+  habitualMidSleepShift_h: number;
+}
+
+/** Published between-person spreads (population-spread.ts); age stays the persona's unless a range is given. */
+export function populationCohortSpread(ageRange_years: readonly [number, number] | null = null): CohortSpread {
+  return {
+    intrinsicPeriodSd_h: INTRINSIC_PERIOD_SD_H,
+    lightSensitivitySdLn: LIGHT_SENSITIVITY_SD_LN,
+    ageRange_years,
+    habitualMidSleepSd_h: HABITUAL_MID_SLEEP_SD_H,
+  };
+}
+
+/** No spread: every occupant equals the persona. */
+export function zeroCohortSpread(): CohortSpread {
+  return { intrinsicPeriodSd_h: 0, lightSensitivitySdLn: 0, ageRange_years: null, habitualMidSleepSd_h: 0 };
+}
