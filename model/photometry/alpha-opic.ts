@@ -11,7 +11,7 @@
 import { ALPHA_OPIC_KEYS, actionSpectra, photopicV, type AlphaOpicKey } from './action-spectra.js';
 import { datasetColumn } from '../data/datasets.js';
 import { resampleLinear } from './resample.js';
-import { scaleSpectrum, spectrum, type Spectrum } from './spectrum.js';
+import { applyTransmittance, scaleSpectrum, spectrum, type Spectrum, type Transmittance } from './spectrum.js';
 import { GRID_LENGTH, GRID_STEP_NM } from './wavelength-grid.js';
 
 /** Maximum luminous efficacy of photopic vision, lm/W (CIE; 683 lm/W at 540 THz ≙ 683.002 at 555 nm). */
@@ -65,13 +65,23 @@ export function d65Efficacy_W_lm(): Readonly<Record<AlphaOpicKey, number>> {
   return cachedD65Efficacy;
 }
 
+export interface AlphaOpicOptions {
+  /**
+   * Transmittance applied at the eye before the α-opic weighting only, e.g. the observer's lens
+   * relative to the 32-year-old reference observer (lens-aging.ts). Photopic illuminance stays
+   * that of the standard observer; K_α,v^D65 stays the reference value (CIE S 026:2018).
+   */
+  readonly eyeTransmittance?: Transmittance;
+}
+
 /** All CIE S 026 quantities of a spectrum. A relative spectrum gives DER and ELR meaningfully; its lux are relative. */
-export function alphaOpicQuantities(s: Spectrum): AlphaOpicResult {
+export function alphaOpicQuantities(s: Spectrum, options: AlphaOpicOptions = {}): AlphaOpicResult {
   const ev = photopicIlluminance_lx(s);
   const k65 = d65Efficacy_W_lm();
+  const atEye = options.eyeTransmittance === undefined ? s : applyTransmittance(s, options.eyeTransmittance);
   const out = {} as Record<AlphaOpicKey, AlphaOpicQuantity>;
   for (const k of ALPHA_OPIC_KEYS) {
-    const e = alphaOpicIrradiance_W_m2(s, k);
+    const e = alphaOpicIrradiance_W_m2(atEye, k);
     const elr = ev > 0 ? e / ev : Number.NaN;
     out[k] = {
       irradiance_mW_m2: e * 1000,
@@ -92,7 +102,7 @@ export function scaleToIlluminance(s: Spectrum, target_lx: number): Spectrum {
 }
 
 /** Melanopic (and other α-opic) DER of a relative spectrum: α-opic EDI per photopic lux. */
-export function alphaOpicDer(s: Spectrum): Readonly<Record<AlphaOpicKey, number>> {
-  const q = alphaOpicQuantities(s).alpha_opic;
+export function alphaOpicDer(s: Spectrum, options: AlphaOpicOptions = {}): Readonly<Record<AlphaOpicKey, number>> {
+  const q = alphaOpicQuantities(s, options).alpha_opic;
   return { sc: q.sc.der, mc: q.mc.der, lc: q.lc.der, rh: q.rh.der, mel: q.mel.der };
 }
