@@ -15,6 +15,23 @@ function helpText(): string {
   return lines.join('\n') + '\n';
 }
 
+/**
+ * `--lon -105.2` would be refused by node's parseArgs (a value starting with "-" looks like an
+ * option); rewrite such pairs as `--lon=-105.2` so negative numbers work as users type them.
+ */
+function joinNegativeNumberValues(args: readonly string[]): string[] {
+  const out: string[] = [];
+  for (let i = 0; i < args.length; i++) {
+    const a = args[i] as string;
+    const next = args[i + 1];
+    if (a.startsWith('--') && !a.includes('=') && next !== undefined && /^-(\d|\.\d)/.test(next)) {
+      out.push(`${a}=${next}`);
+      i++;
+    } else out.push(a);
+  }
+  return out;
+}
+
 export interface Io {
   stdout: (text: string) => void;
   stderr: (text: string) => void;
@@ -36,7 +53,7 @@ export async function runCli(argv: readonly string[], io: Io): Promise<number> {
     let parsed;
     try {
       parsed = parseArgs({
-        args: [...rest],
+        args: joinNegativeNumberValues(rest),
         options: { ...command.options, json: { type: 'boolean' }, help: { type: 'boolean' } },
         allowPositionals: true,
         strict: true,
