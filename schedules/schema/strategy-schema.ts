@@ -76,6 +76,7 @@ export const strategySchema = z
     id: idSchema,
     name: nameSchema,
     description: z.string().max(2000).optional(),
+    personas: z.array(idSchema).optional().describe('People this strategy is meant for; everyone when absent.'),
     changes: z.array(strategyChangeSchema).min(1),
   })
   .describe('A lighting strategy compared with the baseline.');

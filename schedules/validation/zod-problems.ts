@@ -50,7 +50,8 @@ function nearest(key: string, candidates: readonly string[]): string | undefined
   let best: string | undefined;
   let bestD = Infinity;
   for (const c of candidates) {
-    const d = editDistance(key, c);
+    // A field written without its unit suffix (latitude for latitude_deg) counts as a near miss.
+    const d = c.toLowerCase().startsWith(key.toLowerCase() + '_') ? 1 : editDistance(key, c);
     if (d < bestD) {
       bestD = d;
       best = c;
