@@ -1,0 +1,58 @@
+// Electron entry point: wires the real Electron modules into the app controller. This is the
+// only main-process file that loads 'electron' at run time.
+import { app, BrowserWindow, dialog, ipcMain, Menu, session } from 'electron';
+import * as path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { ZeitlightApp } from './app/zeitlight-app.js';
+import { appPaths } from './app/paths.js';
+import { nodeFileSystem } from './files/file-system.js';
+import { realTimers } from './files/autosaver.js';
+import { scenarioFilesInArgs } from './app/command-line.js';
+import { securityViolations } from './security/web-preferences.js';
+
+// dist/electron/main.mjs sits two folders below the app root.
+const appRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
+
+if (!app.requestSingleInstanceLock()) {
+  app.quit();
+} else {
+  app.enableSandbox();
+  app.whenReady().then(async () => {
+    const controller = new ZeitlightApp(
+      {
+        app,
+        createWindow: (options) => {
+          const problems = securityViolations(options.webPreferences);
+          if (problems.length > 0) throw new Error(`refusing an insecure window: ${problems.join('; ')}`);
+          return new BrowserWindow(options);
+        },
+        windowForEvent: (event) => BrowserWindow.fromWebContents(event.sender),
+        focusedWindow: () => BrowserWindow.getFocusedWindow(),
+        dialog,
+        ipcMain,
+        setApplicationMenu: (template) => Menu.setApplicationMenu(Menu.buildFromTemplate(template)),
+        defaultSession: session.defaultSession,
+        platform: process.platform,
+      },
+      nodeFileSystem,
+      appPaths(appRoot, app.getPath('userData')),
+      realTimers,
+      (message) => console.warn(`[zeitlight] ${message}`),
+    );
+    const args = scenarioFilesInArgs(process.argv.slice(1));
+    await controller.start({ files: args.files, demo: args.demo });
+    app.on('second-instance', (_event, argv) => {
+      for (const file of scenarioFilesInArgs(argv.slice(1)).files) void controller.openPath(file);
+    });
+    app.on('open-file', (event, file) => {
+      event.preventDefault();
+      void controller.openPath(file);
+    });
+    app.on('activate', () => {
+      if (controller.openWindowCount() === 0) controller.openWindow({ kind: 'empty' }, null);
+    });
+  }).catch((error: unknown) => {
+    console.error(error);
+    app.quit();
+  });
+}
