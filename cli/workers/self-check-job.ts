@@ -6,6 +6,7 @@
 import { occupantStream } from '../../model/cohort/occupant-stream.js';
 import { sampleOccupantTraits } from '../../model/cohort/sample-occupants.js';
 import type { CohortSpread, OccupantTraits, PersonaTraits } from '../../model/cohort/occupant-traits.js';
+import type { OccupantOutcome } from '../../model/cohort/aggregate-cohort.js';
 
 export interface SelfCheckJob {
   seed: number;
@@ -32,4 +33,19 @@ export function runJob(job: SelfCheckJob): SelfCheckResult {
   let checksum = 0;
   for (let i = 0; i < job.iterations; i++) checksum += Math.sin(rng.nextFloat64() * traits.intrinsicPeriod_h);
   return { traits, checksum };
+}
+
+/**
+ * The same job shaped as a cohort outcome with two invented strategies, for checking the cohort
+ * runner end to end. The "metrics" are arithmetic on the traits, not model output.
+ */
+export function runOutcomeJob(job: SelfCheckJob): OccupantOutcome {
+  const { traits, checksum } = runJob(job);
+  return {
+    occupantIndex: job.occupantIndex,
+    byStrategy: {
+      baseline: { periodExcess_h: traits.intrinsicPeriod_h - 24, checksum },
+      brighter: { periodExcess_h: traits.intrinsicPeriod_h - 24 - 0.1 * Math.log(traits.lightSensitivityMultiplier), checksum },
+    },
+  };
 }

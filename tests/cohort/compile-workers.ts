@@ -20,7 +20,7 @@ export function compileWorkers(): CompiledWorkers {
   const root = mkdtempSync(join(tmpdir(), 'zeitlight-workers-'));
   writeFileSync(join(root, 'package.json'), '{ "type": "module" }\n');
   const tsc = join(PROJECT_ROOT, 'node_modules', 'typescript', 'bin', 'tsc');
-  const entries = ['cli/workers/job-pool.ts', 'cli/workers/worker-host.ts', 'cli/workers/self-check-job.ts', 'tests/cohort/fixtures/exiting-job.ts'];
+  const entries = ['cli/workers/job-pool.ts', 'cli/workers/worker-host.ts', 'cli/workers/self-check-job.ts', 'cli/workers/cohort-run.ts', 'tests/cohort/fixtures/exiting-job.ts'];
   // prettier-ignore
   execFileSync(process.execPath, [tsc, '--outDir', root, '--rootDir', PROJECT_ROOT, '--module', 'NodeNext', '--moduleResolution', 'NodeNext',
     '--target', 'ES2022', '--lib', 'ES2023', '--strict', '--skipLibCheck', '--types', 'node', ...entries.map((e) => join(PROJECT_ROOT, e))], { cwd: PROJECT_ROOT, stdio: 'pipe' });
