@@ -1,0 +1,43 @@
+// Clock-time helpers for charts: hours since t = 0 to day and clock hour, and labels.
+
+export function dayOf(time_h: number): number {
+  return Math.floor(time_h / 24);
+}
+
+/** Clock hour in [0, 24). */
+export function clockHourOf(time_h: number): number {
+  return ((time_h % 24) + 24) % 24;
+}
+
+/** "HH:MM" for a clock hour (any real number, wrapped to a day). */
+export function formatClock(hour: number): string {
+  const minutes = Math.round(clockHourOf(hour) * 60) % 1440;
+  return `${String(Math.floor(minutes / 60)).padStart(2, '0')}:${String(minutes % 60).padStart(2, '0')}`;
+}
+
+/** "Mon 23 Mar" for day `day` after the ISO start date (calendar arithmetic in UTC, no zones). */
+export function formatDayLabel(startDate: string, day: number): string {
+  const [y, m, d] = startDate.split('-').map(Number);
+  const date = new Date(Date.UTC(y ?? 2000, (m ?? 1) - 1, (d ?? 1) + day));
+  const weekday = ['Sun', 'Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat'][date.getUTCDay()];
+  const month = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'][date.getUTCMonth()];
+  return `${weekday} ${date.getUTCDate()} ${month}`;
+}
+
+/**
+ * Places each clock hour on the 24 h branch nearest the previous value, so a series that
+ * drifts across midnight draws as a continuous line (e.g. 23.5, 0.2 → 23.5, 24.2).
+ */
+export function unwrapClockHours(values: readonly (number | null)[], reference: number | null = null): (number | null)[] {
+  let previous = reference;
+  return values.map((v) => {
+    if (v === null) return null;
+    let h = clockHourOf(v);
+    if (previous !== null) {
+      while (h - previous > 12) h -= 24;
+      while (previous - h > 12) h += 24;
+    }
+    previous = h;
+    return h;
+  });
+}

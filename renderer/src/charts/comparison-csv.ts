@@ -1,0 +1,23 @@
+// CSV export of the comparison table: one line per metric × strategy, with the value, the
+// difference versus baseline and the reading. Quoting by papaparse (RFC 4180 style).
+import Papa from 'papaparse';
+import type { NamedItem } from '../results/view-model.js';
+import { formatNumber, type ComparisonRow } from './comparison-data.js';
+
+export const COMPARISON_CSV_HEADER = ['persona', 'metric', 'unit', 'strategy', 'value', 'difference_vs_baseline', 'reading'] as const;
+
+export function comparisonCsv(personaName: string, rows: readonly ComparisonRow[], strategies: readonly NamedItem[]): string {
+  const nameOf = (id: string) => strategies.find((s) => s.id === id)?.name ?? id;
+  const data = rows.flatMap((row) =>
+    row.cells.map((cell) => [
+      personaName,
+      row.label,
+      row.unit,
+      nameOf(cell.strategyId),
+      cell.value === null ? '' : formatNumber(cell.value, row.decimals),
+      cell.difference === null ? '' : formatNumber(cell.difference, row.decimals),
+      cell.reading,
+    ]),
+  );
+  return `${Papa.unparse({ fields: [...COMPARISON_CSV_HEADER], data }, { newline: '\n' })}\n`;
+}

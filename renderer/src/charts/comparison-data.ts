@@ -1,0 +1,56 @@
+// The comparison table: each metric for the baseline and every strategy, the difference
+// versus baseline, and a one-line plain reading of that difference.
+import type { MetricValue, NamedItem, RunView } from '../results/view-model.js';
+
+export interface ComparisonCell {
+  readonly strategyId: string;
+  readonly value: number | null;
+  /** strategy − baseline, in the metric's unit; null for the baseline itself or missing values. */
+  readonly difference: number | null;
+  readonly verdict: 'better' | 'worse' | 'same' | 'neutral' | 'unknown';
+  readonly reading: string;
+}
+
+export interface ComparisonRow {
+  readonly metricId: string;
+  readonly label: string;
+  readonly unit: string;
+  readonly decimals: number;
+  readonly cells: readonly ComparisonCell[];
+}
+
+export function formatNumber(value: number | null, decimals: number): string {
+  if (value === null || !Number.isFinite(value)) return '—';
+  const text = value.toFixed(decimals);
+  return /^-0(\.0*)?$/.test(text) ? text.slice(1) : text;
+}
+
+function readingFor(metric: MetricValue, difference: number, strategyName: string): { verdict: ComparisonCell['verdict']; reading: string } {
+  const threshold = 0.5 * 10 ** -metric.decimals;
+  if (Math.abs(difference) < threshold) return { verdict: 'same', reading: `${metric.label}: no change with ${strategyName}.` };
+  const up = difference > 0;
+  const amount = `${formatNumber(Math.abs(difference), metric.decimals)}${metric.unit === '' ? '' : ` ${metric.unit}`}`;
+  const word = up ? metric.increaseWord : metric.decreaseWord;
+  const verdict = metric.better === 'none' ? 'neutral' : (metric.better === 'higher') === up ? 'better' : 'worse';
+  const judgement = verdict === 'better' ? ' (favourable)' : verdict === 'worse' ? ' (unfavourable)' : '';
+  return { verdict, reading: `${metric.label} ${amount} ${word} than baseline with ${strategyName}${judgement}.` };
+}
+
+export function comparisonRows(runs: readonly RunView[], strategies: readonly NamedItem[], baselineId: string): ComparisonRow[] {
+  const baseline = runs.find((r) => r.strategyId === baselineId);
+  if (baseline === undefined) return [];
+  return baseline.metrics.map((metric) => ({
+    metricId: metric.id,
+    label: metric.label,
+    unit: metric.unit,
+    decimals: metric.decimals,
+    cells: strategies.map((strategy): ComparisonCell => {
+      const run = runs.find((r) => r.strategyId === strategy.id);
+      const value = run?.metrics.find((m) => m.id === metric.id)?.value ?? null;
+      if (strategy.id === baselineId) return { strategyId: strategy.id, value, difference: null, verdict: 'neutral', reading: 'Baseline.' };
+      if (value === null || metric.value === null) return { strategyId: strategy.id, value, difference: null, verdict: 'unknown', reading: `${metric.label}: not available.` };
+      const difference = value - metric.value;
+      return { strategyId: strategy.id, value, difference, ...readingFor(metric, difference, strategy.name) };
+    }),
+  }));
+}

@@ -1,0 +1,90 @@
+// What the results views draw. These types are the renderer's own; results-adapter.ts is the
+// one module that fills them from the run pipeline's results, so a change of the results
+// format touches that file only. Times are hours since t = 0 (local midnight of day 0 at the
+// site), as in the CLI contract.
+
+export type SourceKind = 'daylight' | 'electric' | 'screen' | 'outdoor' | 'measured' | 'other';
+
+export interface LightSourceSeries {
+  readonly id: string;
+  readonly label: string;
+  readonly kind: SourceKind;
+  /** Melanopic EDI at the eye from this source, lx, one value per step. */
+  readonly mel_edi_lx: readonly number[];
+}
+
+export interface LightSeries {
+  readonly start_h: number;
+  readonly step_h: number;
+  readonly sources: readonly LightSourceSeries[];
+}
+
+export interface DayPhase {
+  readonly day: number;
+  /** Core-body-temperature minimum, hours since t = 0; null when not found that day. */
+  readonly cbtmin_h: number | null;
+  /** Dim-light melatonin onset, hours since t = 0; null when not found that day. */
+  readonly dlmo_h: number | null;
+}
+
+export interface MelatoninSeries {
+  readonly time_h: readonly number[];
+  /** Modelled melatonin with light suppression, in the model's unit (see `unit`). */
+  readonly level: readonly number[];
+  /** The same without light suppression (what darkness would give), when available. */
+  readonly unsuppressed: readonly number[] | null;
+  readonly unit: string;
+}
+
+export interface Episode {
+  readonly start_h: number;
+  readonly end_h: number;
+  readonly kind: 'sleep' | 'nap';
+}
+
+export interface MetricValue {
+  readonly id: string;
+  readonly label: string;
+  readonly unit: string;
+  readonly value: number | null;
+  readonly decimals: number;
+  /** Which direction is the favourable one, if any. */
+  readonly better: 'higher' | 'lower' | 'none';
+  /** Words for an increase and a decrease, e.g. "later" / "earlier" for a clock time. */
+  readonly increaseWord: string;
+  readonly decreaseWord: string;
+}
+
+export interface RunView {
+  readonly personaId: string;
+  readonly strategyId: string;
+  readonly light: LightSeries;
+  readonly phases: readonly DayPhase[];
+  readonly melatonin: MelatoninSeries;
+  /** KSS per hour since t = 0 (null while asleep or not modelled). */
+  readonly kssHourly: readonly (number | null)[];
+  readonly sleep: readonly Episode[];
+  readonly metrics: readonly MetricValue[];
+}
+
+export interface NamedItem {
+  readonly id: string;
+  readonly name: string;
+}
+
+export interface ResultsView {
+  readonly scenarioName: string;
+  /** Local date of day 0, "YYYY-MM-DD". */
+  readonly startDate: string;
+  readonly days: number;
+  readonly baselineId: string;
+  /** Baseline first, then the strategies in scenario order. */
+  readonly strategies: readonly NamedItem[];
+  readonly personas: readonly NamedItem[];
+  readonly runs: readonly RunView[];
+  readonly cautions: readonly string[];
+}
+
+export function findRun(view: ResultsView, personaId: string, strategyId: string): RunView | undefined {
+  return view.runs.find((r) => r.personaId === personaId && r.strategyId === strategyId);
+}
