@@ -1,15 +1,16 @@
 import { describe, expect, it } from 'vitest';
 import { cornerFormFactor } from '../../tests/eye/handbook-form-factor.js';
 import { constantConditions, inRoom, ledLikeSpectrum, skyOnlyScene } from '../../tests/eye/scene-fixtures.js';
-import { alphaOpicQuantities, illuminantD65, scaleToIlluminance } from '../photometry/alpha-opic.js';
+import { alphaOpicQuantities, scaleToIlluminance } from '../photometry/alpha-opic.js';
 import { addSpectra, applyTransmittance } from '../photometry/spectrum.js';
 import { GRID_LENGTH, gridWavelength_nm } from '../photometry/wavelength-grid.js';
-import { mccamyCct_K, tristimulus } from './chromaticity.js';
+import { tristimulus } from '../photometry/colorimetry.js';
 import { coolShareForCct } from './electric-lighting.js';
 import { evaluateEyeLight } from './eye-light.js';
 import { prepareRoom } from './prepared-room.js';
 import type { RoomScene } from './scene.js';
-import { screenEyeIlluminance_lx } from './screen.js';
+import { displaySpectra, screenEyeIlluminance_lx } from './screen.js';
+import { defaultDisplayModel } from '../sources/display.js';
 import { cieDaylightSpectrum } from '../sources/cie-daylight.js';
 
 const dark = (n: number) => constantConditions(n, { zenith_deg: 120, azimuth_deg: 0, ebn_lx: 0, edh_lx: 0 });
@@ -26,6 +27,19 @@ describe('screens (E = ∫ L cos θ dω, light-at-eye.md §5.3)', () => {
     expect(Math.abs(screenEyeIlluminance_lx(200, w, h, d) / expected - 1)).toBeLessThan(1e-4);
   });
 
+  it('night mode on the library display model lowers the melanopic EDI per lux and the luminance (light-at-eye.md §5.3: DER falls more than luminance)', () => {
+    const spectra = displaySpectra(defaultDisplayModel());
+    const scene: RoomScene = {
+      ...skyOnlyScene({ windows: [] }),
+      screens: [{ name: 'monitor', width_m: 0.6, height_m: 0.34, viewingDistance_m: 0.65, whiteLuminance_cd_m2: 200, ...spectra, onSchedule: [{ fromMinute: 0, value: true }], nightMode: [{ fromMinute: 0, value: false }, { fromMinute: 1, value: true }] }],
+    };
+    const out = evaluateEyeLight(prepareRoom(scene), dark(2), inRoom(2, 0)).bySource.screen;
+    const derDay = (out.mel_edi_lx[0] as number) / (out.photopic_lx[0] as number);
+    const derNight = (out.mel_edi_lx[1] as number) / (out.photopic_lx[1] as number);
+    expect(derNight).toBeLessThan(derDay * 0.8);
+    expect(out.photopic_lx[1] as number).toBeLessThanOrEqual(out.photopic_lx[0] as number);
+  });
+
   it('a small screen tends to L·A/d² (small-source limit)', () => {
     expect(screenEyeIlluminance_lx(300, 0.02, 0.01, 2) / ((300 * 0.02 * 0.01) / 4)).toBeCloseTo(1, 4);
   });
@@ -36,17 +50,21 @@ describe('screens (E = ∫ L cos θ dω, light-at-eye.md §5.3)', () => {
 });
 
 describe('electric lighting', () => {
-  it('tunable white: the cool share reproduces the target CCT of the mixed spectrum (tristimulus values add, CIE 015)', () => {
+  it('tunable white: the cool share reproduces the target CCT of the physically mixed spectrum (McCamy 1992 cubic as an independent CCT check, ±10 K)', () => {
     const target = 4000;
     const f = coolShareForCct(warm, cool, target);
     const mix = addSpectra(scaleToIlluminance(warm, 1 - f), scaleToIlluminance(cool, f));
     const t = tristimulus(mix);
-    expect(mccamyCct_K(t.X, t.Y, t.Z)).toBeCloseTo(target, 0);
+    // McCamy (1992), Color Res. Appl. 17:142: n = (x − 0.3320)/(0.1858 − y), CCT = 449n³ + 3525n² + 6823.3n + 5520.33 (from memory).
+    const x = t.X / (t.X + t.Y + t.Z);
+    const y = t.Y / (t.X + t.Y + t.Z);
+    const n = (x - 0.332) / (0.1858 - y);
+    expect(Math.abs(449 * n ** 3 + 3525 * n ** 2 + 6823.3 * n + 5520.33 - target)).toBeLessThan(10);
   });
 
-  it('McCamy CCT of CIE D65 is about 6504 K (CIE 015:2018 nominal D65 on today’s c2)', () => {
-    const t = tristimulus(illuminantD65());
-    expect(Math.abs(mccamyCct_K(t.X, t.Y, t.Z) - 6504)).toBeLessThan(5);
+  it('a CCT the two channels cannot mix is refused naming the schedule entry', () => {
+    const scene: RoomScene = { ...skyOnlyScene({ windows: [] }), luminaires: [{ name: 't', tunable: { warm, cool }, eyeAtFullOutput_lx: 100, schedule: [{ fromMinute: 0, value: { level: 1, cct_K: 50000 } }] }] };
+    expect(() => prepareRoom(scene)).toThrow(/luminaires\[0\]\.schedule\[0\]\.value\.cct_K/);
   });
 
   it('eye illuminance from desk × ratio, melanopic EDI equal to that of the physically mixed spectrum (linearity, CIE S 026)', () => {

@@ -9,15 +9,16 @@
  *
  * Output is proportional to the scheduled level (LED output ∝ drive level, light-at-eye.md §5.2,
  * from memory). Tunable white mixes a warm and a cool channel; the cool channel's share f of
- * photopic lux is chosen so that the mix's CCT (tristimulus values add) matches the scheduled CCT,
- * and every α-opic EDI is the lux-weighted sum of the channels' responses (exact, linear).
+ * photopic lux is the one the source library's tunable-white mix finds for the scheduled CCT
+ * (model/sources/tunable-white.ts: tristimulus values add, Ohno 2014 CCT), and every α-opic EDI
+ * is the lux-weighted sum of the channels' responses (exact, linear).
  *
  * Daylight-linked dimming (closed loop on the desk, common practice): the level is lowered so that
  * daylight + electric light on the desk meets the target, never below `minimumLevel` while the
  * schedule has the lights on:  level = min(scheduled, max(minimum, (E_target − E_daylight,desk)/E_desk,full)).
  */
 import type { Spectrum, Transmittance } from '../photometry/spectrum.js';
-import { mccamyCct_K, tristimulus } from './chromaticity.js';
+import { tunableWhiteMix } from '../sources/tunable-white.js';
 import { expandDailySchedule, type DailySchedule } from './daily-schedule.js';
 import { SceneInputError, requireFraction, requireNonNegative, requirePositive } from './scene-input-error.js';
 import { sourceResponse, type SourceResponse } from './source-response.js';
@@ -59,25 +60,9 @@ export interface PreparedLuminaire {
   readonly responses: readonly [readonly SourceResponse[], readonly SourceResponse[]];
 }
 
-/** Cool-channel share of photopic lux that gives the mix the target CCT (bisection; clamped to the channels' own CCTs). */
+/** Cool-channel share of photopic lux that gives the mix the target CCT; throws RangeError outside the channels' range. */
 export function coolShareForCct(warm: Spectrum, cool: Spectrum, target_K: number): number {
-  const w = tristimulus(warm);
-  const c = tristimulus(cool);
-  const mixCct = (f: number) => {
-    const a = (1 - f) / w.Y;
-    const b = f / c.Y;
-    return mccamyCct_K(a * w.X + b * c.X, a * w.Y + b * c.Y, a * w.Z + b * c.Z);
-  };
-  if (target_K <= mixCct(0)) return 0;
-  if (target_K >= mixCct(1)) return 1;
-  let lo = 0;
-  let hi = 1;
-  for (let i = 0; i < 40; i++) {
-    const mid = (lo + hi) / 2;
-    if (mixCct(mid) < target_K) lo = mid;
-    else hi = mid;
-  }
-  return (lo + hi) / 2;
+  return tunableWhiteMix(warm, cool, target_K, 1).coolFraction;
 }
 
 export function prepareLuminaire(field: string, spec: LuminaireSpec, eyewear: Transmittance | undefined): PreparedLuminaire {
@@ -95,24 +80,29 @@ export function prepareLuminaire(field: string, spec: LuminaireSpec, eyewear: Tr
     deskFull = requireNonNegative(`${field}.deskAtFullOutput_lx`, spec.deskAtFullOutput_lx);
     eyeFull = deskFull * ratio;
   } else throw new SceneInputError(`${field}.eyeAtFullOutput_lx`, 'give eyeAtFullOutput_lx or deskAtFullOutput_lx');
-  const settings = expandDailySchedule(`${field}.schedule`, spec.schedule);
-  const level = new Float64Array(settings.length);
-  const coolShare = new Float64Array(settings.length);
-  const shareByCct = new Map<number, number>();
-  settings.forEach((s, m) => {
-    level[m] = s.level;
-    if (tunable !== undefined && s.cct_K !== undefined) {
-      let f = shareByCct.get(s.cct_K);
-      if (f === undefined) {
-        f = coolShareForCct(tunable.warm, tunable.cool, s.cct_K);
-        shareByCct.set(s.cct_K, f);
-      }
-      coolShare[m] = f;
-    } else coolShare[m] = tunable !== undefined ? 0.5 : 0;
-  });
   spec.schedule.forEach((e, i) => {
     requireFraction(`${field}.schedule[${i}].value.level`, e.value.level);
     if (e.value.cct_K !== undefined) requirePositive(`${field}.schedule[${i}].value.cct_K`, e.value.cct_K);
+  });
+  const settings = expandDailySchedule(`${field}.schedule`, spec.schedule);
+  const shareByCct = new Map<number, number>();
+  if (tunable !== undefined) {
+    spec.schedule.forEach((e, i) => {
+      const cct = e.value.cct_K;
+      if (cct === undefined || shareByCct.has(cct)) return;
+      try {
+        shareByCct.set(cct, coolShareForCct(tunable.warm, tunable.cool, cct));
+      } catch (err) {
+        throw new SceneInputError(`${field}.schedule[${i}].value.cct_K`, err instanceof Error ? err.message : String(err));
+      }
+    });
+  }
+  const level = new Float64Array(settings.length);
+  const coolShare = new Float64Array(settings.length);
+  settings.forEach((s, m) => {
+    level[m] = s.level;
+    // Tunable white without a CCT setting: equal lux from both channels.
+    coolShare[m] = tunable === undefined ? 0 : s.cct_K !== undefined ? (shareByCct.get(s.cct_K) as number) : 0.5;
   });
   let dimming: PreparedLuminaire['dimming'];
   if (spec.daylightDimming !== undefined) {

@@ -12,6 +12,13 @@ import { uniformRectangleIlluminance_lx } from './rectangle-view.js';
 import { SceneInputError, requireFinite, requireFraction, requirePositive } from './scene-input-error.js';
 import { sourceResponse, type SourceResponse } from './source-response.js';
 import { directionFromAltAz_deg, vec3 } from './vector3.js';
+import { displayWhite, type DisplayModel } from '../sources/display.js';
+
+/** Day and night spectra and the night luminance factor of a display from the source library's display model. */
+export function displaySpectra(model: DisplayModel): Pick<ScreenSpec, 'spectrum' | 'nightSpectrum' | 'nightLuminanceFactor'> {
+  const night = displayWhite(model, 'night');
+  return { spectrum: displayWhite(model, 'normal').unitSpectrum, nightSpectrum: night.unitSpectrum, nightLuminanceFactor: night.nightLuminanceRatio };
+}
 
 export interface ScreenSpec {
   readonly name: string;
