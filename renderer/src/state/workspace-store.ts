@@ -1,0 +1,104 @@
+// The workspace state: the scenario being edited with its undo history, where it is stored,
+// whether it has unsaved edits, the latest validation problems and results, and progress.
+// A small external store used through React's useSyncExternalStore.
+import type { ScenarioProblem } from '../../../schedules/validation/problem.js';
+import type { ResultsView } from '../results/view-model.js';
+import type { ScenarioInput } from '../scenario/scenario-types.js';
+import { applyEdit, canRedo, canUndo, redo, startHistory, undo, type History } from './history.js';
+
+export type ResultsState =
+  | { readonly status: 'idle' }
+  | { readonly status: 'running'; readonly fraction: number; readonly stage: string }
+  | { readonly status: 'ready'; readonly view: ResultsView; readonly synthetic: boolean }
+  | { readonly status: 'unavailable'; readonly message: string }
+  | { readonly status: 'failed'; readonly message: string };
+
+export interface WorkspaceState {
+  readonly history: History<ScenarioInput | null>;
+  readonly displayName: string;
+  readonly path: string | null;
+  /** The document as last saved or opened; dirty when the present differs. */
+  readonly saved: ScenarioInput | null;
+  readonly problems: readonly ScenarioProblem[];
+  readonly results: ResultsState;
+  readonly progressVisible: boolean;
+  readonly notice: { readonly text: string; readonly tone: 'info' | 'error' } | null;
+}
+
+export function isDirty(state: WorkspaceState): boolean {
+  return state.history.present !== state.saved;
+}
+
+type Listener = () => void;
+
+export class WorkspaceStore {
+  private state: WorkspaceState = {
+    history: startHistory<ScenarioInput | null>(null),
+    displayName: 'Untitled',
+    path: null,
+    saved: null,
+    problems: [],
+    results: { status: 'idle' },
+    progressVisible: false,
+    notice: null,
+  };
+  private readonly listeners = new Set<Listener>();
+
+  constructor(private readonly now: () => number = () => Date.now()) {}
+
+  subscribe = (listener: Listener): (() => void) => {
+    this.listeners.add(listener);
+    return () => this.listeners.delete(listener);
+  };
+
+  getSnapshot = (): WorkspaceState => this.state;
+
+  private set(patch: Partial<WorkspaceState>): void {
+    this.state = { ...this.state, ...patch };
+    for (const l of this.listeners) l();
+  }
+
+  /** Loads a document; `unsaved` marks a recovered draft or a new document as not yet saved. */
+  load(scenario: ScenarioInput, displayName: string, path: string | null, unsaved = false): void {
+    this.set({ history: startHistory<ScenarioInput | null>(scenario), displayName, path, saved: unsaved ? null : scenario, problems: [], results: { status: 'idle' } });
+  }
+
+  /** Applies an edit; edits with the same key in quick succession merge into one undo step. */
+  edit(change: (scenario: ScenarioInput) => ScenarioInput, key: string | null = null): void {
+    const present = this.state.history.present;
+    if (present === null) return;
+    this.set({ history: applyEdit(this.state.history, change(present), key, this.now()) });
+  }
+
+  undo(): void {
+    if (canUndo(this.state.history)) this.set({ history: undo(this.state.history) });
+  }
+
+  redo(): void {
+    if (canRedo(this.state.history)) this.set({ history: redo(this.state.history) });
+  }
+
+  markSaved(displayName: string, path: string | null): void {
+    this.set({ saved: this.state.history.present, displayName, path });
+  }
+
+  setProblems(problems: readonly ScenarioProblem[]): void {
+    this.set({ problems });
+  }
+
+  setResults(results: ResultsState): void {
+    this.set({ results });
+  }
+
+  setProgressVisible(progressVisible: boolean): void {
+    this.set({ progressVisible });
+  }
+
+  notify(text: string, tone: 'info' | 'error' = 'info'): void {
+    this.set({ notice: { text, tone } });
+  }
+
+  clearNotice(): void {
+    this.set({ notice: null });
+  }
+}
