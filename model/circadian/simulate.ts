@@ -1,0 +1,411 @@
+/**
+ * Body-clock simulation driver.
+ *
+ * Pass 1 — pacemaker + its Process L (and, for free sleep, the HCL homeostat) with the chosen
+ * integrator (odex by default). The time axis is split at every discontinuity of the input
+ * (light breakpoints, prescribed sleep/wake, alarms, predicted sleep switches); between them the
+ * right-hand side is smooth (constant light or a smooth light function), so the adaptive solver
+ * takes long steps and restarts only where it must. Phase events are located on the dense
+ * output by bisection: the x minimum (root of dx/dt), the melatonin synthesis angles and, for
+ * free sleep, the threshold crossings.
+ * Pass 2 — plasma melatonin from the synthesis switch times (melatonin-pass.ts).
+ *
+ * Times in h since t = 0 (local midnight of day 0); light in native lux after conversion.
+ */
+import type { Integrator } from '../solver/integrator.js';
+import { createOdexIntegrator } from '../solver/odex-integrator.js';
+import { nativeLightSeries } from './calibration.js';
+import { segmentIndexAt, type LightSeries } from './light-series.js';
+import { cycleAngleAtTime, cycleTimeAtAngle, darkLimitCycle, equivalentState, type LimitCycleTable } from './limit-cycle.js';
+import { melatoninPass, type MelatoninNight, type MelatoninState, type SynthesisSwitch } from './melatonin-pass.js';
+import { ST_HILAIRE_MELATONIN as MEL } from './melatonin-sthilaire.js';
+import type { Pacemaker } from './pacemaker.js';
+import { createFjkCubic } from './fjk-cubic.js';
+import { createJfkX7 } from './jfk-x7.js';
+import { createPacemaker, isPacemakerId } from './registry.js';
+import { HCL_PRESETS, hclCircadianModulation, type HclParams } from './sleep-switch-hcl.js';
+import { DEFAULT_EYELID_TRANSMISSION, normalisedEpisodes, type SleepEpisode, type SleepSpec } from './sleep-input.js';
+
+const DEG = Math.PI / 180;
+const BISECTION_ITERATIONS = 40;
+/** Two x minima closer than this are one event (h). */
+const MIN_MARKER_SPACING_H = 2;
+
+export interface SimulationOptions {
+  readonly model: Pacemaker;
+  /** Light at the eye (melanopic EDI or native lux). */
+  readonly light: LightSeries;
+  /** When true, light(t) = light(t mod 24) (a repeated day, used for entrainment). */
+  readonly periodicLight?: boolean;
+  readonly sleep: SleepSpec;
+  readonly start_h?: number;
+  readonly end_h: number;
+  /** Continue from this state (its time is the start). Default: the model's seed. */
+  readonly initial?: SimState;
+  readonly lightSensitivity?: number;
+  readonly eyelidTransmission?: number;
+  readonly integrator?: Integrator;
+  /** Spacing of stored samples (h); default 0.25. */
+  readonly sampleStep_h?: number;
+}
+
+/** Everything needed to continue a simulation (times in h since t = 0). */
+export interface SimState {
+  readonly t_h: number;
+  /** Pacemaker variables (x, xc, n or R, ψ, n), then the HCL homeostat in free-sleep mode. */
+  readonly y: readonly number[];
+  readonly awake: boolean;
+  readonly melatonin: MelatoninState;
+  /** Synthesis switches found before t_h that fall after it (0.97 h delay). */
+  readonly pendingSwitches: readonly SynthesisSwitch[];
+}
+
+export interface SimulationSamples {
+  readonly t_h: number[];
+  /** First two pacemaker variables (x, xc or R, ψ). */
+  readonly s0: number[];
+  readonly s1: number[];
+  readonly awake: boolean[];
+  /** HCL homeostat (free sleep only; NaN otherwise). */
+  readonly hclPressure: number[];
+  readonly plasmaMelatonin_pmol_L: number[];
+  readonly dimMelatonin_pmol_L: number[];
+}
+
+export interface SimulationRun {
+  readonly model: Pacemaker;
+  readonly start_h: number;
+  readonly end_h: number;
+  readonly xmin_h: number[];
+  readonly cbtmin_h: number[];
+  readonly synOn_h: number[];
+  readonly synOff_h: number[];
+  readonly nights: MelatoninNight[];
+  readonly sleepEpisodes: SleepEpisode[];
+  readonly samples: SimulationSamples;
+  readonly final: SimState;
+  readonly rhsEvaluations: number;
+  readonly steps: number;
+  readonly integrations: number;
+}
+
+function wrap(a: number): number {
+  let d = a % (2 * Math.PI);
+  if (d > Math.PI) d -= 2 * Math.PI;
+  if (d <= -Math.PI) d += 2 * Math.PI;
+  return d;
+}
+
+export interface PhaseTools {
+  /** Synthesis on/off angles of this pacemaker (rad, clockwise convention). */
+  readonly synOn: number;
+  readonly synOff: number;
+  readonly own: LimitCycleTable;
+  readonly cubic: LimitCycleTable;
+  readonly x7: LimitCycleTable;
+}
+
+const toolsCache = new Map<string, PhaseTools>();
+
+/**
+ * St Hilaire's synthesis angles (−65.3°, −166.2°, x⁷ oscillator) and, for the other pacemakers,
+ * the angles at the same time since CBTmin on their own darkness cycle.
+ */
+export function phaseTools(model: Pacemaker): PhaseTools {
+  const key = model.id;
+  let t = toolsCache.get(key);
+  if (t === undefined) {
+    const reference = isPacemakerId(model.id) ? createPacemaker(model.id) : model;
+    const x7 = darkLimitCycle(createJfkX7());
+    const own = darkLimitCycle(reference);
+    let on = MEL.synOnAngle_deg * DEG;
+    let off = MEL.synOffAngle_deg * DEG;
+    if (model.id !== 'jfk99-x7') {
+      const carry = (a: number) => cycleAngleAtTime(own, (cycleTimeAtAngle(x7, a) / x7.period_h) * own.period_h);
+      on = carry(on);
+      off = carry(off);
+    }
+    t = { synOn: on, synOff: off, own, cubic: darkLimitCycle(createFjkCubic()), x7 };
+    toolsCache.set(key, t);
+  }
+  return t;
+}
+
+/** Cubic-oscillator (x, xc) equivalent to a pacemaker state (identity for the cubic models). */
+export function cubicEquivalent(model: Pacemaker, tools: PhaseTools, y: ArrayLike<number>): [number, number] {
+  if (model.id.startsWith('fjk99-cubic')) return [y[0] as number, y[1] as number];
+  return equivalentState(model, tools.own, y, tools.cubic);
+}
+
+/** x⁷-oscillator (x, xc) equivalent to a pacemaker state (identity for the x⁷ model). */
+export function x7Equivalent(model: Pacemaker, tools: PhaseTools, y: ArrayLike<number>): [number, number] {
+  if (model.id === 'jfk99-x7') return [y[0] as number, y[1] as number];
+  return equivalentState(model, tools.own, y, tools.x7);
+}
+
+/** Number of ODE variables for a model and sleep mode. */
+export function odeSize(model: Pacemaker, sleep: SleepSpec): number {
+  return model.stateSize + (sleep.mode === 'free' ? 1 : 0);
+}
+
+/**
+ * A state from pacemaker variables (x, xc, n …): melatonin empty, synthesis branch from the
+ * angle (on inside the synthesis arc), n of K99 equal to the pacemaker's n.
+ */
+export function stateFromPacemaker(model: Pacemaker, pacemaker: readonly number[], sleep: SleepSpec, t_h: number, awake: boolean): SimState {
+  if (pacemaker.length !== model.stateSize) throw new Error(`${model.id} needs ${model.stateSize} state variables (${model.stateNames.join(', ')}), got ${pacemaker.length}`);
+  const tools = phaseTools(model);
+  const a = model.angle(pacemaker);
+  const on = wrap(a - tools.synOn) <= 0 && wrap(a - tools.synOff) > 0;
+  const y = [...pacemaker];
+  if (sleep.mode === 'free') y.push(sleep.initialPressure ?? 13);
+  return {
+    t_h,
+    y,
+    awake,
+    melatonin: { h1: 0, h2: 0, h1Dim: 0, h2Dim: 0, nK99: pacemaker[model.nIndex] as number, on, since_h: -Infinity, atSwitch: on ? MEL.A_pmol_L_min : 0 },
+    pendingSwitches: [],
+  };
+}
+
+function prescribedAwake(episodes: readonly SleepEpisode[], t: number): boolean {
+  for (const e of episodes) if (t >= e.start_h && t < e.end_h) return false;
+  return true;
+}
+
+function nextPrescribedTransition(episodes: readonly SleepEpisode[], t: number): { t_h: number; awake: boolean } | undefined {
+  for (const e of episodes) {
+    if (e.start_h > t + 1e-12) return { t_h: e.start_h, awake: false };
+    if (e.end_h > t + 1e-12) return { t_h: e.end_h, awake: true };
+  }
+  return undefined;
+}
+
+type Dense = (component: number, t: number) => number;
+
+/** Runs the simulation. Throws on inconsistent input (the message names the field). */
+export function simulate(opts: SimulationOptions): SimulationRun {
+  const model = opts.model;
+  const light = nativeLightSeries(opts.light);
+  const periodic = opts.periodicLight === true;
+  const free = opts.sleep.mode === 'free';
+  const hcl: HclParams = opts.sleep.mode === 'free' ? (opts.sleep.hcl ?? HCL_PRESETS.age30) : HCL_PRESETS.age30;
+  const alarm = opts.sleep.mode === 'free' ? opts.sleep.alarm_h : undefined;
+  const episodes = opts.sleep.mode === 'prescribed' ? normalisedEpisodes(opts.sleep.episodes) : [];
+  const tools = phaseTools(model);
+  const sens = opts.lightSensitivity ?? 1;
+  if (!(sens > 0)) throw new Error(`lightSensitivity must be > 0 (got ${sens})`);
+  const eyelid = opts.eyelidTransmission ?? DEFAULT_EYELID_TRANSMISSION;
+  if (!(eyelid >= 0 && eyelid <= 1)) throw new Error(`eyelidTransmission must be within 0–1 (got ${eyelid})`);
+  const integrator = opts.integrator ?? createOdexIntegrator();
+  const sampleStep = opts.sampleStep_h ?? 0.25;
+  const t0 = opts.initial?.t_h ?? opts.start_h ?? 0;
+  const tEnd = opts.end_h;
+  if (!(tEnd > t0)) throw new Error(`end (${tEnd} h) must be after start (${t0} h)`);
+  const size = odeSize(model, opts.sleep);
+  const hclIndex = free ? model.stateSize : -1;
+
+  const initial = opts.initial ?? stateFromPacemaker(model, model.seedState, opts.sleep, t0, prescribedAwake(episodes, t0));
+  if (initial.y.length !== size) throw new Error(`initial state has ${initial.y.length} variables, expected ${size} for ${model.id} (${opts.sleep.mode} sleep)`);
+
+  const xmin: number[] = [];
+  const cbtmin: number[] = [];
+  const synOn: number[] = [];
+  const synOff: number[] = [];
+  const switches: SynthesisSwitch[] = [...initial.pendingSwitches];
+  const sleepEpisodes: SleepEpisode[] = [];
+  const samples = { t_h: [] as number[], s0: [] as number[], s1: [] as number[], awake: [] as boolean[], hclPressure: [] as number[] };
+  let awake = free ? initial.awake : prescribedAwake(episodes, t0);
+  let sleepStart = awake ? Number.NaN : t0;
+  let rhsEvals = 0;
+  let steps = 0;
+  let integrations = 0;
+  let nextSample = Math.ceil(t0 / sampleStep - 1e-9) * sampleStep;
+  let lastDxSign = 0;
+
+  const dayStartOf = (t: number) => (periodic ? 24 * Math.floor(t / 24) : 0);
+  const nextLightBreak = (t: number): number => {
+    const d0 = dayStartOf(t);
+    const idx = segmentIndexAt(light, t - d0);
+    const nxt = light.start_h[idx + 1];
+    if (!periodic) return nxt ?? Infinity;
+    return nxt !== undefined && nxt < 24 ? d0 + nxt : d0 + 24;
+  };
+  const nextAlarm = (t: number): number => (alarm === undefined ? Infinity : alarm + 24 * (Math.floor((t - alarm) / 24 + 1e-12) + 1));
+  const addMarker = (tm: number) => {
+    const last = xmin[xmin.length - 1];
+    if (last !== undefined && tm - last < MIN_MARKER_SPACING_H) return;
+    xmin.push(tm);
+    cbtmin.push(tm + model.marker.cbtminOffset_h);
+  };
+  const addSample = (t: number, get: (i: number) => number) => {
+    samples.t_h.push(t);
+    samples.s0.push(get(0));
+    samples.s1.push(get(1));
+    samples.awake.push(awake);
+    samples.hclPressure.push(hclIndex >= 0 ? get(hclIndex) : Number.NaN);
+  };
+
+  let t = t0;
+  let y = [...initial.y];
+  if (Math.abs(nextSample - t) < 1e-9) {
+    const y0 = y;
+    addSample(t, (i) => y0[i] as number);
+    nextSample += sampleStep;
+  }
+  const dpace = new Array<number>(model.stateSize).fill(0);
+
+  while (t < tEnd - 1e-12) {
+    const d0 = dayStartOf(t);
+    const idx = segmentIndexAt(light, t - d0);
+    const smooth = light.smooth?.[idx];
+    const level = light.level[idx] as number;
+    const gate = (awake ? 1 : eyelid) * sens;
+    const wake = awake ? 1 : 0;
+    const nextEp = free ? undefined : nextPrescribedTransition(episodes, t);
+    let tStop = Math.min(tEnd, nextLightBreak(t), nextEp?.t_h ?? Infinity);
+    if (free && !awake) tStop = Math.min(tStop, nextAlarm(t));
+
+    const rhs = (tq: number, yq: readonly number[]): number[] => {
+      const I = gate * (smooth === undefined ? level : Math.max(0, smooth(tq - d0)));
+      model.derivatives(yq, I, dpace);
+      if (hclIndex < 0) return [...dpace];
+      const d = [...dpace];
+      d.push((hcl.mu * wake - (yq[hclIndex] as number)) / hcl.chi_h);
+      return d;
+    };
+    const angleAt = (dense: Dense, tq: number) => model.angle([dense(0, tq), dense(1, tq)]);
+    const crossing = (dense: Dense, ta: number, tb: number, target: number): number | undefined => {
+      const da = wrap(angleAt(dense, ta) - target);
+      const db = wrap(angleAt(dense, tb) - target);
+      if (!(da > 0 && db <= 0 && da - db < Math.PI)) return undefined;
+      let lo = ta;
+      let hi = tb;
+      for (let k = 0; k < BISECTION_ITERATIONS; k++) {
+        const mid = 0.5 * (lo + hi);
+        if (wrap(angleAt(dense, mid) - target) > 0) lo = mid;
+        else hi = mid;
+      }
+      return 0.5 * (lo + hi);
+    };
+    /** ≥ 0 once the state has crossed the threshold that ends the current sleep/wake state. */
+    const hclGap = (dense: Dense, tq: number): number => {
+      const [cx, cxc] = cubicEquivalent(model, tools, [dense(0, tq), dense(1, tq), dense(2, tq)]);
+      const c = hclCircadianModulation(hcl, cx, cxc);
+      const h = dense(hclIndex, tq);
+      return awake ? h - (hcl.upper + c) : hcl.lower + c - h;
+    };
+
+    let switchAt: number | undefined;
+    const observer = (tOld: number, tNew: number, _yEnd: readonly number[], dense: Dense): number | undefined => {
+      steps++;
+      while (nextSample <= tNew + 1e-9 && nextSample <= tEnd + 1e-9) {
+        const ts = nextSample;
+        addSample(ts, (i) => dense(i, ts));
+        nextSample += sampleStep;
+      }
+      if (model.marker.kind === 'x-min') {
+        const delta = Math.min(1e-4, (tNew - tOld) / 4);
+        const sa = Math.sign(dense(0, tOld + delta) - dense(0, tOld));
+        const sb = Math.sign(dense(0, tNew) - dense(0, tNew - delta));
+        if (lastDxSign < 0 && sa > 0 && dense(0, tOld) < 0) addMarker(tOld);
+        else if (sa < 0 && sb > 0) {
+          const der = (tq: number) => dense(0, tq + delta) - dense(0, tq - delta);
+          let lo = tOld + delta;
+          let hi = tNew - delta;
+          for (let k = 0; k < BISECTION_ITERATIONS; k++) {
+            const mid = 0.5 * (lo + hi);
+            if (der(mid) < 0) lo = mid;
+            else hi = mid;
+          }
+          const tm = 0.5 * (lo + hi);
+          if (dense(0, tm) < 0) addMarker(tm);
+        }
+        lastDxSign = sb;
+      } else {
+        const tc = crossing(dense, tOld, tNew, model.marker.angle_rad);
+        if (tc !== undefined) addMarker(tc);
+      }
+      const on = crossing(dense, tOld, tNew, tools.synOn);
+      if (on !== undefined) {
+        synOn.push(on + MEL.synDelay_h);
+        switches.push({ t_h: on + MEL.synDelay_h, on: true });
+      }
+      const off = crossing(dense, tOld, tNew, tools.synOff);
+      if (off !== undefined) {
+        synOff.push(off + MEL.synDelay_h);
+        switches.push({ t_h: off + MEL.synDelay_h, on: false });
+      }
+      if (hclIndex >= 0 && hclGap(dense, tNew) >= 0 && hclGap(dense, tOld) < 0) {
+        let lo = tOld;
+        let hi = tNew;
+        for (let k = 0; k < BISECTION_ITERATIONS; k++) {
+          const mid = 0.5 * (lo + hi);
+          if (hclGap(dense, mid) < 0) lo = mid;
+          else hi = mid;
+        }
+        switchAt = hi;
+        return hi;
+      }
+      return undefined;
+    };
+
+    const dense = free ? undefined : [0, 1];
+    const res = integrator.integrate(rhs, t, y, tStop, observer, dense);
+    integrations++;
+    rhsEvals += res.rhsEvaluations;
+    const tNew = res.t;
+    y = res.y;
+    let awakeNext = awake;
+    if (free) {
+      if (switchAt !== undefined && res.stoppedEarly) awakeNext = !awake;
+      if (!awake && Math.abs(nextAlarm(t) - tNew) < 1e-9) awakeNext = true;
+    } else if (nextEp !== undefined && Math.abs(nextEp.t_h - tNew) < 1e-9) awakeNext = nextEp.awake;
+    if (awakeNext !== awake) {
+      if (!awakeNext) sleepStart = tNew;
+      else sleepEpisodes.push({ start_h: sleepStart, end_h: tNew });
+      awake = awakeNext;
+    }
+    if (!(tNew > t)) throw new Error(`simulation made no progress at t = ${t} h`);
+    t = tNew;
+  }
+  if (!awake) sleepEpisodes.push({ start_h: sleepStart, end_h: tEnd });
+
+  // Pass 2: melatonin over the same period, with light gated by the sleep just found.
+  const mel = melatoninPass({
+    light,
+    periodicLight: periodic,
+    lightSensitivity: sens,
+    eyelidTransmission: eyelid,
+    sleep: sleepEpisodes,
+    switches: switches.filter((s) => s.t_h <= tEnd),
+    start_h: t0,
+    end_h: tEnd,
+    initial: initial.melatonin,
+    sampleStep_h: sampleStep,
+  });
+
+  const final: SimState = {
+    t_h: tEnd,
+    y,
+    awake,
+    melatonin: mel.final,
+    pendingSwitches: switches.filter((s) => s.t_h > tEnd),
+  };
+  return {
+    model,
+    start_h: t0,
+    end_h: tEnd,
+    xmin_h: xmin,
+    cbtmin_h: cbtmin,
+    synOn_h: synOn,
+    synOff_h: synOff,
+    nights: mel.nights,
+    sleepEpisodes,
+    samples: { ...samples, plasmaMelatonin_pmol_L: mel.plasma_pmol_L, dimMelatonin_pmol_L: mel.plasmaDim_pmol_L },
+    final,
+    rhsEvaluations: rhsEvals,
+    steps,
+    integrations,
+  };
+}

@@ -1,0 +1,45 @@
+/**
+ * Sleep as the body-clock simulation reads it. Prescribed: episodes [start_h, end_h) in hours since
+ * t = 0. Free: predicted by the HCL thresholds (sleep-switch-hcl.ts), with an optional daily alarm.
+ * Light at the eye during sleep is multiplied by the eyelid transmission (default 0: eyes closed,
+ * full gating, as all published couplings do; any non-zero eyelid value would be from memory).
+ */
+import type { HclParams } from './sleep-switch-hcl.js';
+
+export interface SleepEpisode {
+  readonly start_h: number;
+  readonly end_h: number;
+}
+
+export type SleepSpec =
+  | { readonly mode: 'prescribed'; readonly episodes: readonly SleepEpisode[] }
+  | {
+      readonly mode: 'free';
+      /** Clock hour (0–24) at which an alarm ends sleep every day, if any. */
+      readonly alarm_h?: number;
+      readonly hcl?: HclParams;
+      /** Initial homeostat value (HCL H); default 13 (between the thresholds). */
+      readonly initialPressure?: number;
+    };
+
+export const DEFAULT_EYELID_TRANSMISSION = 0;
+
+/** Checks and sorts prescribed episodes; throws naming the episode. */
+export function normalisedEpisodes(episodes: readonly SleepEpisode[]): SleepEpisode[] {
+  const out = [...episodes].sort((a, b) => a.start_h - b.start_h);
+  out.forEach((e, i) => {
+    if (!Number.isFinite(e.start_h) || !Number.isFinite(e.end_h) || !(e.end_h > e.start_h)) {
+      throw new Error(`sleep episode ${i + 1}: end (${e.end_h} h) must be after start (${e.start_h} h)`);
+    }
+    const prev = out[i - 1];
+    if (prev !== undefined && e.start_h < prev.end_h) throw new Error(`sleep episode ${i + 1} overlaps the previous one`);
+  });
+  return out;
+}
+
+/** Episodes of a 24 h routine repeated over days [firstDay, lastDay]. */
+export function repeatDaily(day: readonly SleepEpisode[], firstDay: number, lastDay: number): SleepEpisode[] {
+  const out: SleepEpisode[] = [];
+  for (let d = firstDay; d <= lastDay; d++) for (const e of day) out.push({ start_h: e.start_h + 24 * d, end_h: e.end_h + 24 * d });
+  return normalisedEpisodes(out);
+}
