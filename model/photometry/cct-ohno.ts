@@ -19,8 +19,9 @@
  *              T = −b/(2a),  |Duv| = aT² + bT + c
  * Sign of Duv: positive above the locus (v greater than the locus v at T).
  */
-import { planckOnGrid } from './planck.js';
-import { tristimulus, tristimulusOfValues, uv1960Of, type Uv1960 } from './colorimetry.js';
+import { C2_CIE015_NM_K } from './planck.js';
+import { cie1931Cmf, tristimulus, uv1960Of, type Uv1960 } from './colorimetry.js';
+import { GRID_LENGTH, gridWavelength_nm } from './wavelength-grid.js';
 import type { Spectrum } from './spectrum.js';
 
 export const CCT_TABLE_MIN_K = 1000;
@@ -39,9 +40,30 @@ export interface CctResult {
   readonly solution: 'triangular' | 'parabolic' | 'out-of-range';
 }
 
-/** (u, v) of the Planckian radiator at T (K). */
+let lambdaPow5: Float64Array | undefined;
+let c2OverLambda: Float64Array | undefined;
+
+/** (u, v) of the Planckian radiator at T (K): Planck's law (planck.ts) weighted by the CMFs. */
 export function planckianUv(temperature_K: number): Uv1960 {
-  return uv1960Of(tristimulusOfValues(planckOnGrid(temperature_K)));
+  if (lambdaPow5 === undefined || c2OverLambda === undefined) {
+    lambdaPow5 = new Float64Array(GRID_LENGTH);
+    c2OverLambda = new Float64Array(GRID_LENGTH);
+    for (let i = 0; i < GRID_LENGTH; i++) {
+      lambdaPow5[i] = gridWavelength_nm(i) ** -5;
+      c2OverLambda[i] = C2_CIE015_NM_K / gridWavelength_nm(i);
+    }
+  }
+  const { xBar, yBar, zBar } = cie1931Cmf();
+  let X = 0;
+  let Y = 0;
+  let Z = 0;
+  for (let i = 0; i < GRID_LENGTH; i++) {
+    const p = (lambdaPow5[i] as number) / Math.expm1((c2OverLambda[i] as number) / temperature_K);
+    X += p * (xBar[i] as number);
+    Y += p * (yBar[i] as number);
+    Z += p * (zBar[i] as number);
+  }
+  return uv1960Of({ X, Y, Z });
 }
 
 interface LocusTable {
@@ -50,13 +72,14 @@ interface LocusTable {
   readonly v: Float64Array;
 }
 
-function locusTable(tFrom_K: number, ratio: number, count: number): LocusTable {
+/** Locus table T_i = tFrom · ratio^i; `known` supplies points already computed (index → u, v). */
+function locusTable(tFrom_K: number, ratio: number, count: number, known: ReadonlyMap<number, Uv1960> = new Map()): LocusTable {
   const t = new Float64Array(count);
   const u = new Float64Array(count);
   const v = new Float64Array(count);
   for (let i = 0; i < count; i++) {
     t[i] = tFrom_K * ratio ** i;
-    const p = planckianUv(t[i] as number);
+    const p = known.get(i) ?? planckianUv(t[i] as number);
     u[i] = p.u;
     v[i] = p.v;
   }
@@ -100,7 +123,13 @@ export function cctDuvFromUv(p: Uv1960): CctResult {
   while (ratio > FINEST_RATIO) {
     const t0 = table.t[m - 1] as number;
     ratio = ((table.t[m + 1] as number) / t0) ** (1 / REFINE_DIVISIONS);
-    table = locusTable(t0, ratio, REFINE_DIVISIONS + 1);
+    const half = REFINE_DIVISIONS / 2;
+    const known = new Map<number, Uv1960>([
+      [0, { u: table.u[m - 1] as number, v: table.v[m - 1] as number }],
+      [half, { u: table.u[m] as number, v: table.v[m] as number }],
+      [REFINE_DIVISIONS, { u: table.u[m + 1] as number, v: table.v[m + 1] as number }],
+    ]);
+    table = locusTable(t0, ratio, REFINE_DIVISIONS + 1, known);
     m = Math.min(Math.max(nearestIndex(table, p), 1), REFINE_DIVISIONS - 1);
   }
   const tm1 = table.t[m - 1] as number;
