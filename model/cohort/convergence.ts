@@ -47,6 +47,8 @@ export class CohortConvergence {
   private readonly outcomes: (OccupantOutcome | undefined)[] = [];
   private prefix = 0;
   private readonly checkpointList: ConvergenceCheckpoint[] = [];
+  /** "strategy/metric" → values of occupants 0 … prefix − 1 (null where absent). */
+  private readonly columns = new Map<string, { strategy: string; metric: string; values: (number | null)[] }>();
   private stop: number | null = null;
 
   constructor(private readonly options: ConvergenceOptions) {
@@ -65,7 +67,9 @@ export class CohortConvergence {
     if (this.outcomes[i] !== undefined) throw new RangeError(`occupant ${i} was added twice`);
     this.outcomes[i] = outcome;
     const completed: ConvergenceCheckpoint[] = [];
-    while (this.outcomes[this.prefix] !== undefined) {
+    let next: OccupantOutcome | undefined;
+    while ((next = this.outcomes[this.prefix]) !== undefined) {
+      this.appendToColumns(next);
       this.prefix++;
       if (this.prefix % this.batchSize === 0) completed.push(this.checkpoint());
     }
@@ -91,20 +95,23 @@ export class CohortConvergence {
     return t[metricKey(strategy, metric)] ?? t[metric] ?? t.default;
   }
 
-  private checkpoint(): ConvergenceCheckpoint {
+  private appendToColumns(outcome: OccupantOutcome): void {
     const n = this.prefix;
-    const columns = new Map<string, { strategy: string; metric: string; values: (number | null)[] }>();
-    for (let i = 0; i < n; i++) {
-      const outcome = this.outcomes[i] as OccupantOutcome;
-      for (const [strategy, metrics] of Object.entries(outcome.byStrategy)) {
-        for (const [metric, value] of Object.entries(metrics)) {
-          const key = metricKey(strategy, metric);
-          let c = columns.get(key);
-          if (c === undefined) columns.set(key, (c = { strategy, metric, values: [] }));
-          c.values.push(value);
-        }
+    for (const [strategy, metrics] of Object.entries(outcome.byStrategy)) {
+      for (const [metric, value] of Object.entries(metrics)) {
+        const key = metricKey(strategy, metric);
+        let c = this.columns.get(key);
+        if (c === undefined) this.columns.set(key, (c = { strategy, metric, values: new Array<number | null>(n).fill(null) }));
+        c.values.push(value);
       }
     }
+    // Metrics this occupant lacks count as missing for it.
+    for (const c of this.columns.values()) if (c.values.length === n) c.values.push(null);
+  }
+
+  private checkpoint(): ConvergenceCheckpoint {
+    const n = this.prefix;
+    const columns = this.columns;
     const previous = this.checkpointList[this.checkpointList.length - 1];
     const metrics: Record<string, MetricReadout> = {};
     let allWithin = previous !== undefined;
