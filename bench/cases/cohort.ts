@@ -13,7 +13,7 @@ import { medianMs } from '../timing.js';
 
 const OCCUPANTS = 1000;
 const STRATEGIES = ['baseline', 'daylight', 'tunable', 'screens'];
-const persona = { intrinsicPeriod_h: 24.18, lightSensitivityMultiplier: 1, age_years: 40 };
+const persona = { intrinsicPeriod_h: 24.18, lightSensitivity: 1, age_y: 40 };
 const spread = populationCohortSpread([25, 55]);
 
 async function medianAsyncMs(fn: () => Promise<unknown>, repeats = 5, warmup = 1): Promise<number> {
@@ -33,8 +33,8 @@ function outcomes(): OccupantOutcome[] {
     const byStrategy: Record<string, Record<string, number>> = {};
     STRATEGIES.forEach((s, k) => {
       byStrategy[s] = {
-        phaseShift_h: (t.intrinsicPeriod_h - 24.18) * 10 - k * 0.1 * Math.log(t.lightSensitivityMultiplier),
-        melatoninSuppression_pct: 30 + 10 * Math.log(t.lightSensitivityMultiplier) + k,
+        phaseShift_h: (t.intrinsicPeriod_h - 24.18) * 10 - k * 0.1 * Math.log(t.lightSensitivity),
+        melatoninSuppression_pct: 30 + 10 * Math.log(t.lightSensitivity) + k,
         kss7Share: 0.1 + 0.01 * t.habitualMidSleepShift_h,
         midSleep_h: 3.5 + t.habitualMidSleepShift_h,
       };

@@ -45,7 +45,7 @@ export function runOutcomeJob(job: SelfCheckJob): OccupantOutcome {
     occupantIndex: job.occupantIndex,
     byStrategy: {
       baseline: { periodExcess_h: traits.intrinsicPeriod_h - 24, checksum },
-      brighter: { periodExcess_h: traits.intrinsicPeriod_h - 24 - 0.1 * Math.log(traits.lightSensitivityMultiplier), checksum },
+      brighter: { periodExcess_h: traits.intrinsicPeriod_h - 24 - 0.1 * Math.log(traits.lightSensitivity), checksum },
     },
   };
 }

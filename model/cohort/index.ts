@@ -4,7 +4,7 @@ export { SplitMix64, mix64 } from './splitmix64.js';
 export { occupantStream, assertCohortSeed, TRAIT_STREAM } from './occupant-stream.js';
 export { standardNormal, truncatedStandardNormal } from './normal-draw.js';
 export * from './population-spread.js';
-export { populationCohortSpread, zeroCohortSpread, type CohortSpread, type OccupantTraits, type PersonaTraits } from './occupant-traits.js';
+export { pacemakerPersonOf, populationCohortSpread, zeroCohortSpread, type CohortSpread, type OccupantTraits, type PersonaTraits } from './occupant-traits.js';
 export { assertCohortSpread, assertPersonaTraits } from './validate-cohort-input.js';
 export { sampleCohort, sampleOccupantTraits } from './sample-occupants.js';
 export { quantileOfSorted, summarizeDistribution, type DistributionSummary } from './quantiles.js';

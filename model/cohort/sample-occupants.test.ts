@@ -10,7 +10,7 @@ import {
   PHILLIPS_2019_PARTICIPANTS,
 } from './population-spread.js';
 
-const persona: PersonaTraits = { intrinsicPeriod_h: 24.18, lightSensitivityMultiplier: 1, age_years: 40 };
+const persona: PersonaTraits = { intrinsicPeriod_h: 24.18, lightSensitivity: 1, age_y: 40 };
 
 function meanSd(xs: readonly number[]): { mean: number; sd: number } {
   let s = 0;
@@ -37,7 +37,7 @@ describe('cohort sampling matches its stated distributions (seed 20261201, n = 2
   });
 
   it('light sensitivity: ln multiplier has mean 0 and SD 0.889 (from Phillips et al. 2019 PNAS ED50 range)', () => {
-    const { mean, sd } = meanSd(cohort.map((o) => Math.log(o.lightSensitivityMultiplier)));
+    const { mean, sd } = meanSd(cohort.map((o) => Math.log(o.lightSensitivity)));
     expect(Math.abs(mean)).toBeLessThan(4 * seMean(LIGHT_SENSITIVITY_SD_LN));
     expect(Math.abs(sd - LIGHT_SENSITIVITY_SD_LN)).toBeLessThan(4 * seSd(LIGHT_SENSITIVITY_SD_LN));
   });
@@ -55,7 +55,7 @@ describe('cohort sampling matches its stated distributions (seed 20261201, n = 2
   });
 
   it('age: uniform over the persona range 25–45 y (mean 35, SD 20/√12 = 5.77)', () => {
-    const ages = cohort.map((o) => o.age_years);
+    const ages = cohort.map((o) => o.age_y);
     const { mean, sd } = meanSd(ages);
     const sigma = 20 / Math.sqrt(12);
     // Uniform: SE(variance) = √((μ4 − σ⁴)/n), μ4 = w⁴/80, σ⁴ = w⁴/144; SE(SD) ≈ SE(variance)/(2σ).
@@ -76,7 +76,7 @@ describe('light-sensitivity spread reproduces the published ED50 range', () => {
     const target = Math.log(PHILLIPS_2019_ED50_RANGE_LX[1] / PHILLIPS_2019_ED50_RANGE_LX[0]);
     let sumRange = 0;
     for (let p = 0; p < panels; p++) {
-      const lns = sampleCohort(persona, populationCohortSpread(), 1000 + p, PHILLIPS_2019_PARTICIPANTS).map((o) => Math.log(o.lightSensitivityMultiplier));
+      const lns = sampleCohort(persona, populationCohortSpread(), 1000 + p, PHILLIPS_2019_PARTICIPANTS).map((o) => Math.log(o.lightSensitivity));
       sumRange += Math.max(...lns) - Math.min(...lns);
     }
     expect(Math.abs(sumRange / panels - target)).toBeLessThan(4 * 0.017 + 0.01);
@@ -93,9 +93,9 @@ describe('zero-spread cohorts', () => {
         fc.nat({ max: 2 ** 40 }),
         fc.nat({ max: 10_000 }),
         (tau, sens, age, seed, index) => {
-          const p: PersonaTraits = { intrinsicPeriod_h: tau, lightSensitivityMultiplier: sens, age_years: age };
+          const p: PersonaTraits = { intrinsicPeriod_h: tau, lightSensitivity: sens, age_y: age };
           const o = sampleOccupantTraits(p, zeroCohortSpread(), seed, index);
-          expect(o).toEqual({ occupantIndex: index, intrinsicPeriod_h: tau, lightSensitivityMultiplier: sens, age_years: age, habitualMidSleepShift_h: 0 });
+          expect(o).toEqual({ occupantIndex: index, intrinsicPeriod_h: tau, lightSensitivity: sens, age_y: age, habitualMidSleepShift_h: 0 });
         },
       ),
       { numRuns: 200 },
@@ -103,8 +103,8 @@ describe('zero-spread cohorts', () => {
   });
 
   it('a one-year age range [a, a] also returns exactly a', () => {
-    const o = sampleOccupantTraits(persona, { ...zeroCohortSpread(), ageRange_years: [33, 33] }, 7, 3);
-    expect(o.age_years).toBe(33);
+    const o = sampleOccupantTraits(persona, { ...zeroCohortSpread(), ageRange_y: [33, 33] }, 7, 3);
+    expect(o.age_y).toBe(33);
   });
 });
 
@@ -120,9 +120,9 @@ describe('determinism', () => {
 
 describe('bad input', () => {
   it('names the offending field', () => {
-    expect(() => sampleOccupantTraits({ ...persona, lightSensitivityMultiplier: 0 }, zeroCohortSpread(), 1, 0)).toThrow(/lightSensitivityMultiplier/);
+    expect(() => sampleOccupantTraits({ ...persona, lightSensitivity: 0 }, zeroCohortSpread(), 1, 0)).toThrow(/lightSensitivity/);
     expect(() => sampleOccupantTraits(persona, { ...zeroCohortSpread(), intrinsicPeriodSd_h: -0.1 }, 1, 0)).toThrow(/intrinsicPeriodSd_h/);
-    expect(() => sampleOccupantTraits(persona, { ...zeroCohortSpread(), ageRange_years: [50, 30] }, 1, 0)).toThrow(/ageRange_years/);
+    expect(() => sampleOccupantTraits(persona, { ...zeroCohortSpread(), ageRange_y: [50, 30] }, 1, 0)).toThrow(/ageRange_y/);
     expect(() => sampleCohort(persona, zeroCohortSpread(), 1, 0)).toThrow(/cohort size/);
     expect(() => sampleOccupantTraits(persona, zeroCohortSpread(), -5, 0)).toThrow(/seed/);
   });

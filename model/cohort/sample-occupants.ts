@@ -28,16 +28,16 @@ export function sampleOccupantTraits(persona: PersonaTraits, spread: CohortSprea
     throw new RangeError(`occupant index: must be a non-negative whole number, got ${String(occupantIndex)}`);
   }
   const lnSensitivity = normalTrait(seed, occupantIndex, TRAIT_STREAM.lightSensitivity, 0, spread.lightSensitivitySdLn);
-  let age_years = persona.age_years;
-  if (spread.ageRange_years !== null) {
-    const [min, max] = spread.ageRange_years;
-    age_years = min === max ? min : min + (max - min) * occupantStream(seed, occupantIndex, TRAIT_STREAM.age).nextFloat64();
+  let age_y = persona.age_y;
+  if (spread.ageRange_y !== null) {
+    const [min, max] = spread.ageRange_y;
+    age_y = min === max ? min : min + (max - min) * occupantStream(seed, occupantIndex, TRAIT_STREAM.age).nextFloat64();
   }
   return {
     occupantIndex,
     intrinsicPeriod_h: normalTrait(seed, occupantIndex, TRAIT_STREAM.intrinsicPeriod, persona.intrinsicPeriod_h, spread.intrinsicPeriodSd_h),
-    lightSensitivityMultiplier: lnSensitivity === 0 ? persona.lightSensitivityMultiplier : persona.lightSensitivityMultiplier * Math.exp(lnSensitivity),
-    age_years,
+    lightSensitivity: lnSensitivity === 0 ? persona.lightSensitivity : persona.lightSensitivity * Math.exp(lnSensitivity),
+    age_y,
     habitualMidSleepShift_h: normalTrait(seed, occupantIndex, TRAIT_STREAM.habitualSleepTiming, 0, spread.habitualMidSleepSd_h),
   };
 }

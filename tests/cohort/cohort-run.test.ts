@@ -14,7 +14,7 @@ beforeAll(async () => {
 }, 120_000);
 afterAll(() => rmSync(compiled.root, { recursive: true, force: true }));
 
-const persona = { intrinsicPeriod_h: 24.18, lightSensitivityMultiplier: 1, age_years: 40 };
+const persona = { intrinsicPeriod_h: 24.18, lightSensitivity: 1, age_y: 40 };
 const jobs = (n: number, spread: CohortSpread): SelfCheckJob[] =>
   Array.from({ length: n }, (_, i) => ({ seed: 77, occupantIndex: i, persona, spread, iterations: 500 + (i % 5) * 4000 }));
 

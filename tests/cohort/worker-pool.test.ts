@@ -18,7 +18,7 @@ const jobs = (n: number, extra: Partial<SelfCheckJob> = {}): SelfCheckJob[] =>
   Array.from({ length: n }, (_, i) => ({
     seed: 20261201,
     occupantIndex: i,
-    persona: { intrinsicPeriod_h: 24.18, lightSensitivityMultiplier: 1, age_years: 40 },
+    persona: { intrinsicPeriod_h: 24.18, lightSensitivity: 1, age_y: 40 },
     spread: populationCohortSpread([25, 55]),
     // Uneven work so that jobs finish out of order on several workers.
     iterations: 2000 + ((i * 7919) % 13) * 3000,
