@@ -1,7 +1,7 @@
 /**
  * Entrained initial state: repeat day 0's light (and sleep) for as many days as needed until the
  * daily phase marker moves by less than ENTRAIN_MARKER_TOL_H and the amplitude at midnight by less
- * than ENTRAIN_AMPLITUDE_TOL, at most ENTRAIN_MAX_DAYS days (convergence rule as recommended in
+ * than ENTRAIN_AMPLITUDE_TOL (and the sleep pressure by less than ENTRAIN_PRESSURE_TOL_NM), at most ENTRAIN_MAX_DAYS days (convergence rule as recommended in
  * the models reference, §10: 1 min and 1e-4, cap ≈ 100 days). The returned state is rebased to
  * t = 0 (local midnight of day 0).
  */
@@ -13,6 +13,8 @@ import type { Integrator } from '../solver/integrator.js';
 
 export const ENTRAIN_MARKER_TOL_H = 1 / 60;
 export const ENTRAIN_AMPLITUDE_TOL = 1e-4;
+/** Change of the sleep pressure at midnight between days (nM); its 59 h time constant is the slowest. */
+export const ENTRAIN_PRESSURE_TOL_NM = 1e-3;
 export const ENTRAIN_MAX_DAYS = 100;
 /** Minimum number of repeated days before convergence is tested (transients from the seed). */
 export const ENTRAIN_MIN_DAYS = 5;
@@ -75,6 +77,7 @@ export function entrain(opts: EntrainOptions): EntrainResult {
   let state = stateFromPacemaker(opts.model, opts.model.seedState, opts.sleep, 0, !asleepAtMidnight);
   let prevMarker = Number.NaN;
   let prevAmp = Number.NaN;
+  let prevPressure = Number.NaN;
   let lastMarker = Number.NaN;
   for (let day = 0; day < ENTRAIN_MAX_DAYS; day++) {
     const run = simulate({
@@ -87,22 +90,23 @@ export function entrain(opts: EntrainOptions): EntrainResult {
       ...(opts.lightSensitivity === undefined ? {} : { lightSensitivity: opts.lightSensitivity }),
       ...(opts.eyelidTransmission === undefined ? {} : { eyelidTransmission: opts.eyelidTransmission }),
       ...(opts.integrator === undefined ? {} : { integrator: opts.integrator }),
-      sampleStep_h: 24,
     });
     state = run.final;
     const m = run.xmin_h[run.xmin_h.length - 1];
     const marker = m === undefined ? Number.NaN : m - 24 * day;
     const amp = opts.model.amplitude(state.y);
+    const pressure = state.homeostat_nM;
     lastMarker = marker;
     if (day >= ENTRAIN_MIN_DAYS) {
       const dm = Math.abs(marker - prevMarker);
       const markerMoved = Math.min(dm, 24 - dm);
-      if (markerMoved < ENTRAIN_MARKER_TOL_H && Math.abs(amp - prevAmp) < ENTRAIN_AMPLITUDE_TOL) {
+      if (markerMoved < ENTRAIN_MARKER_TOL_H && Math.abs(amp - prevAmp) < ENTRAIN_AMPLITUDE_TOL && Math.abs(pressure - prevPressure) < ENTRAIN_PRESSURE_TOL_NM) {
         return { state: rebase(state, 24 * (day + 1)), days: day + 1, converged: true, lastMarker_h: marker };
       }
     }
     prevMarker = marker;
     prevAmp = amp;
+    prevPressure = pressure;
   }
   return { state: rebase(state, 24 * ENTRAIN_MAX_DAYS), days: ENTRAIN_MAX_DAYS, converged: false, lastMarker_h: lastMarker };
 }

@@ -9,6 +9,8 @@
  * output by bisection: the x minimum (root of dx/dt), the melatonin synthesis angles and, for
  * free sleep, the threshold crossings.
  * Pass 2 — plasma melatonin from the synthesis switch times (melatonin-pass.ts).
+ * Pass 3 — sleep pressure and KSS on the sample grid (sleepiness-postnova.ts). Neither feeds
+ * back on the pacemaker, so the split is exact up to the passes' own discretisation.
  *
  * Times in h since t = 0 (local midnight of day 0); light in native lux after conversion.
  */
@@ -24,6 +26,7 @@ import { createFjkCubic } from './fjk-cubic.js';
 import { createJfkX7 } from './jfk-x7.js';
 import { createPacemaker, isPacemakerId } from './registry.js';
 import { HCL_PRESETS, hclCircadianModulation, type HclParams } from './sleep-switch-hcl.js';
+import { HOMEOSTAT_SEED_NM, homeostatPass, kss, postnovaCircadianDrive } from './sleepiness-postnova.js';
 import { DEFAULT_EYELID_TRANSMISSION, normalisedEpisodes, type SleepEpisode, type SleepSpec } from './sleep-input.js';
 
 const DEG = Math.PI / 180;
@@ -58,6 +61,8 @@ export interface SimState {
   readonly melatonin: MelatoninState;
   /** Synthesis switches found before t_h that fall after it (0.97 h delay). */
   readonly pendingSwitches: readonly SynthesisSwitch[];
+  /** Postnova 2018 homeostatic sleep pressure H (nM). */
+  readonly homeostat_nM: number;
 }
 
 export interface SimulationSamples {
@@ -70,6 +75,11 @@ export interface SimulationSamples {
   readonly hclPressure: number[];
   readonly plasmaMelatonin_pmol_L: number[];
   readonly dimMelatonin_pmol_L: number[];
+  /** Postnova 2018 sleep pressure H (nM) and circadian drive C. */
+  readonly sleepPressure_nM: number[];
+  readonly circadianDrive: number[];
+  /** KSS (Postnova 2018) while awake; NaN asleep. */
+  readonly kss: number[];
 }
 
 export interface SimulationRun {
@@ -165,6 +175,7 @@ export function stateFromPacemaker(model: Pacemaker, pacemaker: readonly number[
     awake,
     melatonin: { h1: 0, h2: 0, h1Dim: 0, h2Dim: 0, nK99: pacemaker[model.nIndex] as number, on, since_h: -Infinity, atSwitch: on ? MEL.A_pmol_L_min : 0 },
     pendingSwitches: [],
+    homeostat_nM: HOMEOSTAT_SEED_NM,
   };
 }
 
@@ -385,12 +396,30 @@ export function simulate(opts: SimulationOptions): SimulationRun {
     sampleStep_h: sampleStep,
   });
 
+  // Pass 3: sleep pressure and KSS on the sample grid.
+  const C = samples.t_h.map((_t, i) => {
+    const [X, Y] = x7Equivalent(model, tools, [samples.s0[i] as number, samples.s1[i] as number]);
+    return postnovaCircadianDrive(X, Y);
+  });
+  const transitions = sleepEpisodes.flatMap((e) => [e.start_h, e.end_h]).sort((a, b) => a - b);
+  const asleepAt = (tq: number) => sleepEpisodes.some((e) => tq >= e.start_h && tq < e.end_h);
+  const hom = homeostatPass(samples.t_h, C, (tq) => !asleepAt(tq), transitions, initial.homeostat_nM);
+  const kssValues = samples.t_h.map((tq, i) => (asleepAt(tq) ? Number.NaN : kss(hom.H_nM[i] as number, C[i] as number)));
+  // the last sample may lie before tEnd: finish H to tEnd
+  const lastT = samples.t_h[samples.t_h.length - 1] ?? t0;
+  let finalH = hom.final_nM;
+  if (tEnd > lastT + 1e-9) {
+    const tail = homeostatPass([lastT, tEnd], [C[C.length - 1] ?? 0.3, C[C.length - 1] ?? 0.3], (tq) => !asleepAt(tq), transitions, finalH);
+    finalH = tail.final_nM;
+  }
+
   const final: SimState = {
     t_h: tEnd,
     y,
     awake,
     melatonin: mel.final,
     pendingSwitches: switches.filter((s) => s.t_h > tEnd),
+    homeostat_nM: finalH,
   };
   return {
     model,
@@ -402,7 +431,14 @@ export function simulate(opts: SimulationOptions): SimulationRun {
     synOff_h: synOff,
     nights: mel.nights,
     sleepEpisodes,
-    samples: { ...samples, plasmaMelatonin_pmol_L: mel.plasma_pmol_L, dimMelatonin_pmol_L: mel.plasmaDim_pmol_L },
+    samples: {
+      ...samples,
+      plasmaMelatonin_pmol_L: mel.plasma_pmol_L,
+      dimMelatonin_pmol_L: mel.plasmaDim_pmol_L,
+      sleepPressure_nM: hom.H_nM,
+      circadianDrive: C,
+      kss: kssValues,
+    },
     final,
     rhsEvaluations: rhsEvals,
     steps,

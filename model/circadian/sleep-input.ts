@@ -24,15 +24,18 @@ export type SleepSpec =
 
 export const DEFAULT_EYELID_TRANSMISSION = 0;
 
-/** Checks and sorts prescribed episodes; throws naming the episode. */
+/** Checks, sorts and joins prescribed episodes (touching ones merge); throws naming the episode. */
 export function normalisedEpisodes(episodes: readonly SleepEpisode[]): SleepEpisode[] {
-  const out = [...episodes].sort((a, b) => a.start_h - b.start_h);
-  out.forEach((e, i) => {
+  const sorted = [...episodes].sort((a, b) => a.start_h - b.start_h);
+  const out: SleepEpisode[] = [];
+  sorted.forEach((e, i) => {
     if (!Number.isFinite(e.start_h) || !Number.isFinite(e.end_h) || !(e.end_h > e.start_h)) {
       throw new Error(`sleep episode ${i + 1}: end (${e.end_h} h) must be after start (${e.start_h} h)`);
     }
-    const prev = out[i - 1];
-    if (prev !== undefined && e.start_h < prev.end_h) throw new Error(`sleep episode ${i + 1} overlaps the previous one`);
+    const prev = out[out.length - 1];
+    if (prev !== undefined && e.start_h < prev.end_h - 1e-9) throw new Error(`sleep episode ${i + 1} (from ${e.start_h} h) overlaps the previous one (to ${prev.end_h} h)`);
+    if (prev !== undefined && e.start_h <= prev.end_h + 1e-9) out[out.length - 1] = { start_h: prev.start_h, end_h: e.end_h };
+    else out.push(e);
   });
   return out;
 }
