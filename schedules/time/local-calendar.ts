@@ -5,7 +5,7 @@
  * maps to its first occurrence. This keeps the mapping monotonic, so segments laid out in wall
  * time tile real time with no gap and no overlap.
  */
-import { DateTime, IANAZone } from 'luxon';
+import { IANAZone } from 'luxon';
 
 const MS_PER_MIN = 60_000;
 
@@ -13,24 +13,66 @@ export function isValidTimeZone(zone: string): boolean {
   return IANAZone.isValidZone(zone);
 }
 
+/**
+ * Offset lookups go through Intl and are slow; offsets are memoised per zone on a 15-minute grid
+ * (every transition in the modern tz database falls on a quarter hour).
+ */
+const QUARTER_HOUR_MS = 15 * MS_PER_MIN;
+const offsetMemo = new Map<string, Map<number, number>>();
+const MEMO_LIMIT = 200_000;
+
+function zoneOffset_min(zone: string, utc_ms: number): number {
+  let memo = offsetMemo.get(zone);
+  if (memo === undefined) {
+    memo = new Map();
+    offsetMemo.set(zone, memo);
+  }
+  const key = Math.floor(utc_ms / QUARTER_HOUR_MS);
+  let off = memo.get(key);
+  if (off === undefined) {
+    off = IANAZone.create(zone).offset(key * QUARTER_HOUR_MS);
+    if (memo.size > MEMO_LIMIT) memo.clear();
+    memo.set(key, off);
+  }
+  return off;
+}
+
 /** Offset from UTC (minutes) in force at a UTC instant. */
 export function utcOffsetAt_min(zone: string, utc_ms: number): number {
-  return IANAZone.create(zone).offset(utc_ms);
+  return zoneOffset_min(zone, utc_ms);
 }
 
 /** Parses "YYYY-MM-DD" to {year, month, day}; undefined for an impossible date. */
+const dateMemo = new Map<string, { year: number; month: number; day: number } | undefined>();
+
 export function parseIsoDate(text: string): { year: number; month: number; day: number } | undefined {
+  if (dateMemo.has(text)) return dateMemo.get(text);
+  if (dateMemo.size > 100_000) dateMemo.clear();
+  const parsed = parseIsoDateUncached(text);
+  dateMemo.set(text, parsed);
+  return parsed;
+}
+
+function parseIsoDateUncached(text: string): { year: number; month: number; day: number } | undefined {
   const m = /^(\d{4})-(\d{2})-(\d{2})$/.exec(text);
   if (m === null) return undefined;
-  const d = DateTime.fromObject({ year: Number(m[1]), month: Number(m[2]), day: Number(m[3]) }, { zone: 'UTC' });
-  return d.isValid ? { year: d.year, month: d.month, day: d.day } : undefined;
+  const year = Number(m[1]);
+  const month = Number(m[2]);
+  const day = Number(m[3]);
+  const d = new Date(Date.UTC(year, month - 1, day));
+  d.setUTCFullYear(year);
+  return d.getUTCFullYear() === year && d.getUTCMonth() === month - 1 && d.getUTCDate() === day ? { year, month, day } : undefined;
+}
+
+function formatIsoDate(d: Date): string {
+  return `${String(d.getUTCFullYear()).padStart(4, '0')}-${String(d.getUTCMonth() + 1).padStart(2, '0')}-${String(d.getUTCDate()).padStart(2, '0')}`;
 }
 
 /** "YYYY-MM-DD" of the date `days` after `date` (calendar arithmetic, zone-free). */
 export function addDays(date: string, days: number): string {
   const p = parseIsoDate(date);
   if (p === undefined) throw new RangeError(`not a date: ${date}`);
-  return DateTime.fromObject(p, { zone: 'UTC' }).plus({ days }).toISODate() ?? date;
+  return formatIsoDate(new Date(Date.UTC(p.year, p.month - 1, p.day + days)));
 }
 
 /** Whole days from date a to date b (b − a). */
@@ -57,7 +99,7 @@ export function wallTimeToUtc_ms(zone: string, date: string, minuteOfDay: number
   const p = parseIsoDate(date);
   if (p === undefined) throw new RangeError(`not a date: ${date}`);
   const wallAsUtc = Date.UTC(p.year, p.month - 1, p.day) + minuteOfDay * MS_PER_MIN;
-  const z = IANAZone.create(zone);
+  const z = { offset: (t: number) => zoneOffset_min(zone, t) };
   // Offsets a day either side bracket any single transition near this wall time.
   const offBefore = z.offset(wallAsUtc - 86_400_000);
   const offAfter = z.offset(wallAsUtc + 86_400_000);
@@ -78,8 +120,13 @@ export function wallTimeToUtc_ms(zone: string, date: string, minuteOfDay: number
   return hi;
 }
 
-/** Local date and minute after local midnight for a real instant. */
+/** Local date, minute after local midnight and ISO weekday (1 = Monday) for a real instant. */
 export function utcToWallTime(zone: string, utc_ms: number): { date: string; minuteOfDay: number; weekday: number } {
-  const dt = DateTime.fromMillis(utc_ms, { zone });
-  return { date: dt.toISODate() ?? '', minuteOfDay: dt.hour * 60 + dt.minute + dt.second / 60, weekday: dt.weekday };
+  const local = new Date(utc_ms + zoneOffset_min(zone, utc_ms) * MS_PER_MIN);
+  const dow = local.getUTCDay();
+  return {
+    date: formatIsoDate(local),
+    minuteOfDay: local.getUTCHours() * 60 + local.getUTCMinutes() + local.getUTCSeconds() / 60 + local.getUTCMilliseconds() / 60_000,
+    weekday: dow === 0 ? 7 : dow,
+  };
 }
