@@ -45,6 +45,12 @@ export function addResponse(c: QuantityColumns, i: number, lux: number, r: Float
   c.mel_edi_lx[i] = (c.mel_edi_lx[i] as number) + lux * (r[5] as number);
 }
 
+/** addResponse into a source's columns and into the total at once. */
+export function addResponse2(c: QuantityColumns, total: QuantityColumns, i: number, lux: number, r: Float64Array): void {
+  addResponse(c, i, lux, r);
+  addResponse(total, i, lux, r);
+}
+
 export function sumColumns(parts: readonly QuantityColumns[], n: number): QuantityColumns {
   const out = emptyQuantityColumns(n);
   const keys = Object.keys(out) as (keyof QuantityColumns)[];

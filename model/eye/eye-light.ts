@@ -14,9 +14,9 @@
  * Spectral: glazing τ(λ), eyewear τ(λ) and the daylight spectrum (CIE D at the minute's CCT) enter
  * through per-source responses (source-response.ts).
  */
-import { addResponse, emptyQuantityColumns, sumColumns, type EyeLightColumns, type QuantityColumns } from './eye-light-columns.js';
+import { addResponse2, emptyQuantityColumns, type EyeLightColumns } from './eye-light-columns.js';
 import { luminaireLevel } from './electric-lighting.js';
-import { relativeAngularTransmittance } from './glazing.js';
+import { relativeAngularTransmittanceFast } from './glazing.js';
 import { BLIND_OPEN, nextBlindState, type BlindMemory } from './blinds.js';
 import type { PreparedRoom } from './prepared-room.js';
 import { SceneInputError } from './scene-input-error.js';
@@ -24,7 +24,7 @@ import { PLACE_OUTDOORS, PLACE_ROOM, type Occupancy, type OutdoorConditions } fr
 import { cieSkyTypeFromClearness, perezClearness } from './sky-type-choice.js';
 import { skyLuminancePerDiffuseLux } from './sky-luminance.js';
 import { TREGENZA_PATCH_COUNT } from './tregenza-patches.js';
-import { rayPassesAperture } from './window-coefficients.js';
+import { nonZeroPatches, rayPassesAperture } from './window-coefficients.js';
 import { directionFromAltAz_deg, type Vec3 } from './vector3.js';
 
 /** Daylight efficacy used to turn E_bn into W/m² when no irradiance is given (lm/W; light-at-eye.md §2.3 quick fallback, from memory). */
@@ -70,10 +70,25 @@ function skyTypeAt(c: OutdoorConditions, i: number): number {
   return cieSkyTypeFromClearness(eps);
 }
 
-function dotPatches(a: Float64Array, b: Float64Array): number {
+interface SparsePatches {
+  readonly index: Int32Array;
+  readonly weight: Float64Array;
+}
+
+function sparse(v: Float64Array): SparsePatches {
+  const index = nonZeroPatches(v);
+  return { index, weight: Float64Array.from(index, (k) => v[k] as number) };
+}
+
+function dotSparse(lum: Float64Array, c: SparsePatches): number {
   let s = 0;
-  for (let k = 0; k < TREGENZA_PATCH_COUNT; k++) s += (a[k] as number) * (b[k] as number);
+  for (let j = 0; j < c.index.length; j++) s += (lum[c.index[j] as number] as number) * (c.weight[j] as number);
   return s;
+}
+
+function lerpAt(a: Float64Array, k: number, t: number): number {
+  const a0 = a[k] as number;
+  return t === 0 ? a0 : a0 + ((a[k + 1] as number) - a0) * t;
 }
 
 const KNOT_QUANTITIES = 6; // eyeOpen, eyeObstructed, deskOpen, deskObstructed, planeOpen, planeObstructed
@@ -84,6 +99,10 @@ function skyKnots(room: PreparedRoom, c: OutdoorConditions, n: number): { step: 
   const knots = Math.ceil((n - 1) / step) + 1;
   const values = room.windows.map(() => Array.from({ length: KNOT_QUANTITIES }, () => new Float64Array(knots)));
   const lum = new Float64Array(TREGENZA_PATCH_COUNT);
+  const vectors = room.windows.map((w) => {
+    const wc = w.coefficients;
+    return [wc.eye.skyOpen, wc.eye.skyObstructed, wc.desk.skyOpen, wc.desk.skyObstructed, wc.planeSkyOpen, wc.planeSkyObstructed].map(sparse);
+  });
   for (let k = 0; k < knots; k++) {
     const i = Math.min(k * step, n - 1);
     // Nothing to scale at night: skip knots when the sky is dark here and at both neighbours.
@@ -91,16 +110,11 @@ function skyKnots(room: PreparedRoom, c: OutdoorConditions, n: number): { step: 
     const next = Math.min(n - 1, i + step);
     if (!((c.diffuseHorizontal_lx[i] as number) > 0 || (c.diffuseHorizontal_lx[prev] as number) > 0 || (c.diffuseHorizontal_lx[next] as number) > 0)) continue;
     skyLuminancePerDiffuseLux(skyTypeAt(c, i), sunVector(c, i), lum);
-    room.windows.forEach((w, wi) => {
+    for (let wi = 0; wi < vectors.length; wi++) {
       const q = values[wi] as Float64Array[];
-      const wc = w.coefficients;
-      (q[0] as Float64Array)[k] = dotPatches(lum, wc.eye.skyOpen);
-      (q[1] as Float64Array)[k] = dotPatches(lum, wc.eye.skyObstructed);
-      (q[2] as Float64Array)[k] = dotPatches(lum, wc.desk.skyOpen);
-      (q[3] as Float64Array)[k] = dotPatches(lum, wc.desk.skyObstructed);
-      (q[4] as Float64Array)[k] = dotPatches(lum, wc.planeSkyOpen);
-      (q[5] as Float64Array)[k] = dotPatches(lum, wc.planeSkyObstructed);
-    });
+      const v = vectors[wi] as SparsePatches[];
+      for (let j = 0; j < KNOT_QUANTITIES; j++) (q[j] as Float64Array)[k] = dotSparse(lum, v[j] as SparsePatches);
+    }
   }
   return { step, values };
 }
@@ -116,6 +130,7 @@ export function evaluateEyeLight(room: PreparedRoom, c: OutdoorConditions, occ: 
   const electric = emptyQuantityColumns(n);
   const screen = emptyQuantityColumns(n);
   const outdoor = emptyQuantityColumns(n);
+  const total = emptyQuantityColumns(n);
   const blindState = room.windows.map(() => new Uint8Array(n));
   const memories: BlindMemory[] = room.windows.map(() => ({ state: BLIND_OPEN, clearMinutes: 0 }));
   const knots = n > 0 ? skyKnots(room, c, n) : { step: 1, values: [] };
@@ -136,7 +151,7 @@ export function evaluateEyeLight(room: PreparedRoom, c: OutdoorConditions, occ: 
     const worn = (room.eyewearWorn[minuteOfDay] as number) === 1 ? 1 : 0;
     const cct = c.daylightCct_K !== undefined ? (c.daylightCct_K[i] as number) : 6504;
     if (place === PLACE_OUTDOORS) {
-      if (c.outdoorEye_lx !== undefined) addResponse(outdoor, i, c.outdoorEye_lx[i] as number, room.outdoorDaylight[worn].at(cct));
+      if (c.outdoorEye_lx !== undefined) addResponse2(outdoor, total, i, c.outdoorEye_lx[i] as number, room.outdoorDaylight[worn].at(cct));
       wasInRoom = false;
       continue;
     }
@@ -149,10 +164,15 @@ export function evaluateEyeLight(room: PreparedRoom, c: OutdoorConditions, occ: 
     const edh = c.diffuseHorizontal_lx[i] as number;
     const ebn = c.directNormal_lx[i] as number;
     const bnW = c.directNormal_W_m2 !== undefined ? (c.directNormal_W_m2[i] as number) : ebn / FALLBACK_BEAM_EFFICACY_LM_W;
-    const s = sunVector(c, i);
+    const sunZen = (c.sunZenith_deg[i] as number) * DEG;
+    const sunAz = (c.sunAzimuth_deg[i] as number) * DEG;
+    const sinZen = Math.sin(sunZen);
+    const sx = Math.sin(sunAz) * sinZen;
+    const sy = Math.cos(sunAz) * sinZen;
+    const sz = Math.cos(sunZen);
     const month = (c.month[i] as number) - 1;
     const rhoGround = c.snowOnGround !== undefined && (c.snowOnGround[i] as number) === 1 ? room.groundSnow : (room.groundMonthly[month] as number);
-    const egh = edh + ebn * Math.max(0, s.z);
+    const egh = edh + ebn * Math.max(0, sz);
     const groundLum = (rhoGround * egh) / Math.PI;
     const k = Math.floor(i / knots.step);
     const t = (i - k * knots.step) / knots.step;
@@ -162,22 +182,17 @@ export function evaluateEyeLight(room: PreparedRoom, c: OutdoorConditions, occ: 
       const wc = w.coefficients;
       const win = wc.window;
       const q = knots.values[wi] as Float64Array[];
-      const lerp = (a: Float64Array) => {
-        const a0 = a[k] as number;
-        const a1 = (a[k + 1] ?? a0) as number;
-        return a0 + (a1 - a0) * t;
-      };
       const obsT = win.obstructionTransmittance[month] as number;
       const obsF = obsT + (1 - obsT) * win.obstructionLuminanceFraction;
       const sunAlt = 90 - (c.sunZenith_deg[i] as number);
       const sunF = sunAlt <= 0 || ebn <= 0 ? 0 : sunAlt < win.obstructionAngle_deg ? obsT : 1;
       const nw = win.outwardNormal;
-      const cosW = s.x * nw.x + s.y * nw.y + s.z * nw.z;
-      const sunThroughGlass = sunF > 0 && cosW > 0 ? ebn * sunF * relativeAngularTransmittance(cosW, win.panes) : 0;
-      const planeSky = edh * (lerp(q[4] as Float64Array) + lerp(q[5] as Float64Array) * obsF);
+      const cosW = sx * nw.x + sy * nw.y + sz * nw.z;
+      const sunThroughGlass = sunF > 0 && cosW > 0 ? ebn * sunF * relativeAngularTransmittanceFast(cosW, win.panes) : 0;
+      const planeSky = edh * (lerpAt(q[4] as Float64Array, k, t) + lerpAt(q[5] as Float64Array, k, t) * obsF);
       const planeSun = sunThroughGlass * Math.max(0, cosW);
       const planeGround = groundLum * wc.planeGround;
-      const sunDesk = sunThroughGlass > 0 && rayPassesAperture(wc.desk, s, nw) ? sunThroughGlass * Math.max(0, s.z) : 0;
+      const sunDesk = sunThroughGlass > 0 && rayPassesAperture(wc.desk, sx, sy, sz, nw) ? sunThroughGlass * Math.max(0, sz) : 0;
       const resp = w.daylight[worn].at(cct);
       // Photopic glazing transmittance for this daylight spectrum (no eyewear: the desk is not behind the glasses).
       const glassLux = w.daylight[0].at(cct)[0] as number;
@@ -188,9 +203,9 @@ export function evaluateEyeLight(room: PreparedRoom, c: OutdoorConditions, occ: 
       let desk: number;
       if (state === BLIND_OPEN) {
         const reflected = w.reflectedPerFlux * ((planeSky + planeSun) * room.rhoLower + planeGround * room.rhoUpper);
-        const sunEye = sunThroughGlass > 0 && g !== undefined && rayPassesAperture(wc.eye, s, nw) ? sunThroughGlass * Math.max(0, s.x * g.x + s.y * g.y + s.z * g.z) : 0;
-        eye = edh * (lerp(q[0] as Float64Array) + lerp(q[1] as Float64Array) * obsF) + groundLum * wc.eye.ground + sunEye + reflected;
-        desk = edh * (lerp(q[2] as Float64Array) + lerp(q[3] as Float64Array) * obsF) + groundLum * wc.desk.ground + sunDesk + reflected;
+        const sunEye = sunThroughGlass > 0 && g !== undefined && rayPassesAperture(wc.eye, sx, sy, sz, nw) ? sunThroughGlass * Math.max(0, sx * g.x + sy * g.y + sz * g.z) : 0;
+        eye = edh * (lerpAt(q[0] as Float64Array, k, t) + lerpAt(q[1] as Float64Array, k, t) * obsF) + groundLum * wc.eye.ground + sunEye + reflected;
+        desk = edh * (lerpAt(q[2] as Float64Array, k, t) + lerpAt(q[3] as Float64Array, k, t) * obsF) + groundLum * wc.desk.ground + sunDesk + reflected;
       } else {
         const transmitted = (w.shading.transmittance[state] as number) * (planeSky + planeSun + planeGround);
         const reflected = w.reflectedPerFlux * transmitted * 0.5 * (room.rhoLower + room.rhoUpper);
@@ -198,7 +213,7 @@ export function evaluateEyeLight(room: PreparedRoom, c: OutdoorConditions, occ: 
         desk = (transmitted / Math.PI) * wc.desk.windowView + reflected;
       }
       daylightDesk += desk * glassLux;
-      if (inRoom && eye > 0) addResponse(daylight, i, eye, resp);
+      if (inRoom && eye > 0) addResponse2(daylight, total, i, eye, resp);
     }
     if (!inRoom) continue;
 
@@ -207,19 +222,18 @@ export function evaluateEyeLight(room: PreparedRoom, c: OutdoorConditions, occ: 
       if (level <= 0) continue;
       const lux = level * l.eyeFull_lx;
       const r = l.responses[worn];
-      if (r.length === 1) addResponse(electric, i, lux, r[0] as Float64Array);
+      if (r.length === 1) addResponse2(electric, total, i, lux, r[0] as Float64Array);
       else {
         const f = l.coolShare[minuteOfDay] as number;
-        addResponse(electric, i, lux * (1 - f), r[0] as Float64Array);
-        addResponse(electric, i, lux * f, r[1] as Float64Array);
+        addResponse2(electric, total, i, lux * (1 - f), r[0] as Float64Array);
+        addResponse2(electric, total, i, lux * f, r[1] as Float64Array);
       }
     }
     for (const sc of room.screens) {
       if ((sc.on[minuteOfDay] as number) !== 1) continue;
       const night = (sc.night[minuteOfDay] as number) === 1;
-      addResponse(screen, i, night ? sc.nightEye_lx : sc.dayEye_lx, sc.responses[worn][night ? 1 : 0]);
+      addResponse2(screen, total, i, night ? sc.nightEye_lx : sc.dayEye_lx, sc.responses[worn][night ? 1 : 0]);
     }
   }
-  const total: QuantityColumns = sumColumns([daylight, electric, screen, outdoor], n);
   return { minutes: n, startMinuteOfDay: occ.startMinuteOfDay, bySource: { daylight, electric, screen, outdoor }, total, blindState };
 }

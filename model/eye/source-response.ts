@@ -32,12 +32,15 @@ export function sourceResponse(source: Spectrum, filters: readonly Transmittance
 /** CIE daylight responses by CCT, rounded to `step_K` and cached (daylight CCT changes slowly). */
 export class DaylightResponses {
   private readonly cache = new Map<number, SourceResponse>();
+  private lastCct = Number.NaN;
+  private last: SourceResponse | undefined;
   constructor(
     private readonly filters: readonly Transmittance[],
     private readonly step_K = 100,
   ) {}
 
   at(cct_K: number): SourceResponse {
+    if (cct_K === this.lastCct && this.last !== undefined) return this.last;
     const c = Math.min(DAYLIGHT_CCT_MAX_K, Math.max(DAYLIGHT_CCT_MIN_K, Number.isFinite(cct_K) ? cct_K : 6504));
     const key = Math.round(c / this.step_K) * this.step_K;
     let r = this.cache.get(key);
@@ -45,6 +48,8 @@ export class DaylightResponses {
       r = sourceResponse(cieDaylightSpectrum(key), this.filters);
       this.cache.set(key, r);
     }
+    this.lastCct = cct_K;
+    this.last = r;
     return r;
   }
 }
