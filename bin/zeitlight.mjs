@@ -10,6 +10,11 @@ if (!existsSync(entry)) {
   process.stderr.write('zeitlight: the command line is not built yet; run "npm run build" in the project folder.\n');
   process.exit(1);
 }
+// A reader that closes the pipe early (`zeitlight sources | head`) is not an error.
+process.stdout.on('error', (err) => {
+  if (err.code === 'EPIPE') process.exit(process.exitCode ?? 0);
+  throw err;
+});
 const { runCli } = await import(pathToFileURL(entry).href);
 const code = await runCli(process.argv.slice(2), {
   stdout: (t) => process.stdout.write(t),
