@@ -3,7 +3,7 @@ import { cornerFormFactor, offsetRectangleFormFactor } from '../../tests/eye/han
 import { constantConditions, inRoom, skyOnlyScene } from '../../tests/eye/scene-fixtures.js';
 import { evaluateEyeLight } from './eye-light.js';
 import { prepareRoom } from './prepared-room.js';
-import { relativeAngularTransmittance } from './glazing.js';
+import { relativeAngularTransmittance, relativeAngularTransmittanceFast } from './glazing.js';
 import type { RoomScene } from './scene.js';
 
 const EDH = 10000;
@@ -56,6 +56,10 @@ describe('Fresnel angular transmittance (Born & Wolf §1.5)', () => {
     // at 0°: R = (0.526/2.526)² = 0.04336, T = 0.95664. One pane (two interfaces): (0.9065/0.95664)² = 0.898.
     expect(relativeAngularTransmittance(0.5, 1)).toBeCloseTo(0.898, 3);
     expect(relativeAngularTransmittance(Math.cos((80 * Math.PI) / 180), 2)).toBeLessThan(0.6);
+  });
+
+  it('the per-minute table agrees with the formula to 1e-4', () => {
+    for (let c = 0.0005; c <= 1; c += 0.0037) expect(Math.abs(relativeAngularTransmittanceFast(c, 2) - relativeAngularTransmittance(c, 2))).toBeLessThan(1e-4);
   });
 });
 
