@@ -141,3 +141,25 @@ export class CohortConvergence {
     return cp;
   }
 }
+
+/**
+ * Suggested stop rule for headline metrics (tolerances in each metric's unit, per batch of 50):
+ * timings 0.05 h (3 min, a tenth of the usual 30-min melatonin sampling step — common practice),
+ * percentages 1 percentage point, shares 0.01. At least 200 occupants before a stop.
+ */
+export const DEFAULT_COHORT_CONVERGENCE: ConvergenceOptions = {
+  batchSize: 50,
+  minOccupants: 200,
+  tolerance: {
+    default: 0.05,
+    phaseShift_h: 0.05,
+    dlmo_h: 0.05,
+    cbtmin_h: 0.05,
+    midSleep_h: 0.05,
+    sleepOnset_h: 0.05,
+    sleepOffset_h: 0.05,
+    melatoninSuppression_pct: 1,
+    kss7Share_pct: 1,
+    kss7Share: 0.01,
+  },
+};

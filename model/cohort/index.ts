@@ -9,4 +9,4 @@ export { assertCohortSpread, assertPersonaTraits } from './validate-cohort-input
 export { sampleCohort, sampleOccupantTraits } from './sample-occupants.js';
 export { quantileOfSorted, summarizeDistribution, type DistributionSummary } from './quantiles.js';
 export { aggregateCohort, seriesBands, type CohortSummary, type MetricValues, type OccupantOutcome, type SeriesBands } from './aggregate-cohort.js';
-export { CohortConvergence, metricKey, type ConvergenceCheckpoint, type ConvergenceOptions, type MetricReadout } from './convergence.js';
+export { CohortConvergence, DEFAULT_COHORT_CONVERGENCE, metricKey, type ConvergenceCheckpoint, type ConvergenceOptions, type MetricReadout } from './convergence.js';
