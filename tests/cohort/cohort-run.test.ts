@@ -58,4 +58,12 @@ describe('cohort run on the worker pool', () => {
     });
     expect(seen).toEqual([1, 2, 3, 4, 5, 6, 7, 8]);
   });
+
+  it('refuses a job whose outcome belongs to another occupant', async () => {
+    const list = jobs(4, populationCohortSpread());
+    list[2] = { ...(list[2] as SelfCheckJob), occupantIndex: 9 };
+    await expect(
+      cohort.runCohortPool({ jobs: list, jobModule: compiled.url('cli/workers/self-check-job.ts'), exportName: 'runOutcomeJob', workers: 2 }),
+    ).rejects.toThrow(/job 2 returned the outcome of occupant 9/);
+  });
 });
