@@ -1,3 +1,60 @@
-import { notYetAvailable } from './not-yet.js';
+/**
+ * `zeitlight models [--json]` — the body-clock models this version can run, with their
+ * parameter sets, phase-marker rules and sources.
+ */
+import type { Command, CommandContext } from '../command.js';
+import { formatTable, HEALTH_CAUTION, printJson } from '../output.js';
+import { DLMO_BEFORE_CBTMIN_H } from '../../model/circadian/body-clock.js';
+import { calibrationMelanopicDer, CALIBRATION_ILLUMINANT } from '../../model/circadian/calibration.js';
+import { ST_HILAIRE_MELATONIN } from '../../model/circadian/melatonin-sthilaire.js';
+import { createPacemaker, DEFAULT_PACEMAKER_ID, PACEMAKER_IDS } from '../../model/circadian/registry.js';
+import { HCL_PRESETS } from '../../model/circadian/sleep-switch-hcl.js';
+import { POSTNOVA_2018 } from '../../model/circadian/sleepiness-postnova.js';
 
-export const modelsCommand = notYetAvailable('models', 'List the physiological models and their parameter sets', '[--json]');
+export const modelsCommand: Command = {
+  name: 'models',
+  summary: 'List the body-clock models, their parameter sets and sources',
+  usage: '[--json]',
+  options: {},
+  async run(ctx: CommandContext): Promise<number> {
+    const pacemakers = PACEMAKER_IDS.map((id) => {
+      const m = createPacemaker(id);
+      const { source: processLSource, ...processL } = m.processL;
+      return {
+        id,
+        default: id === DEFAULT_PACEMAKER_ID,
+        label: m.label,
+        source: m.source,
+        state: m.stateNames,
+        parameters: m.parameters,
+        process_l: { ...processL, source: processLSource },
+        intrinsic_period_h: Math.round(m.tau_h * 10000) / 10000,
+        cbtmin_rule: m.marker.kind === 'x-min' ? `time of the x minimum + ${m.marker.cbtminOffset_h} h` : 'time at which ψ ≡ π',
+        dlmo_rule: `CBTmin − ${DLMO_BEFORE_CBTMIN_H} h`,
+      };
+    });
+    const doc = {
+      pacemakers,
+      melatonin: { id: 'sthilaire07-melatonin', source: 'St Hilaire, Gronfier, Zeitzer & Klerman 2007 J Pineal Res 43:294', parameters: ST_HILAIRE_MELATONIN },
+      sleepiness: { id: 'postnova18-kss', source: 'Postnova, Lockley & Robinson 2018 J Biol Rhythms 33:203 (quasi-steady arousal state)', parameters: POSTNOVA_2018 },
+      free_sleep: { id: 'hcl23', source: 'Skeldon et al. 2023/24 PLoS Comput Biol (Homeostatic–Circadian–Light model, authors\' code)', presets: HCL_PRESETS },
+      light_input: {
+        native: 'photopic lux of cool-white fluorescent light (the models\' calibration source)',
+        melanopic: `melanopic EDI is divided by the melanopic DER of CIE ${CALIBRATION_ILLUMINANT} = ${calibrationMelanopicDer().toFixed(4)}`,
+        sleep_gating: 'no light reaches the eye during sleep (eyelid transmission 0)',
+      },
+      person_parameters: {
+        tau_h: 'intrinsic (free-running) period in darkness, h',
+        lightSensitivity: 'multiplier on the native-lux input before Process L (1 = published model)',
+      },
+      caution: HEALTH_CAUTION,
+    };
+    if (ctx.json) {
+      printJson(ctx, doc);
+      return 0;
+    }
+    ctx.stdout(formatTable(['id', 'period h', 'CBTmin rule', 'model'], pacemakers.map((p) => [p.id + (p.default ? ' *' : ''), p.intrinsic_period_h.toFixed(2), p.cbtmin_rule, p.label])));
+    ctx.stdout(`\n* default. Melatonin: ${doc.melatonin.source}. Sleepiness: ${doc.sleepiness.source}.\n\n${HEALTH_CAUTION}\n`);
+    return 0;
+  },
+};

@@ -1,3 +1,127 @@
-import { notYetAvailable } from './not-yet.js';
+/**
+ * `zeitlight simulate <light.csv> --days <n> [--model <id>] [--init entrained|<x,xc,n>]
+ * [--sleep <csv>] [--alarm <hour>] [--json]` — body clock, melatonin and sleepiness for one
+ * person from a light series. JSON keys follow the stable CLI contract (architecture §4):
+ * `model`, `xmin_h`, `cbtmin_h`, `dlmo_h`, `melatonin_suppression_pct` (per night), `kss_hourly`;
+ * `kss_sleepy_hours`, `sleep_episodes`, `entrainment`, `input`, `warnings`, `definitions` and
+ * `caution` are extra.
+ * Without --sleep, sleep is predicted by the model (free sleep), with an optional daily alarm.
+ */
+import { readFileSync } from 'node:fs';
+import { CliError, UsageError } from '../cli-error.js';
+import type { Command, CommandContext } from '../command.js';
+import { numberOption, positionals, requiredNumberOption, stringOption } from '../args.js';
+import { formatTable, HEALTH_CAUTION, printJson } from '../output.js';
+import { DLMO_BEFORE_CBTMIN_H, runBodyClock, type InitialCondition } from '../../model/circadian/body-clock.js';
+import { BodyClockInputError, parseLightCsv, parseSleepCsv } from '../../model/circadian/light-csv.js';
+import { createPacemaker, DEFAULT_PACEMAKER_ID, isPacemakerId, PACEMAKER_IDS } from '../../model/circadian/registry.js';
+import type { SleepSpec } from '../../model/circadian/sleep-input.js';
 
-export const simulateCommand = notYetAvailable('simulate', 'Body clock, melatonin and sleepiness from a light series', '<light.csv> --days <n> [--model <id>]');
+const MAX_DAYS = 366;
+
+function readText(path: string, what: string): string {
+  try {
+    return readFileSync(path, 'utf8');
+  } catch (err) {
+    const code = (err as NodeJS.ErrnoException).code;
+    const why = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a directory' : code === 'EACCES' ? 'permission denied' : (err as Error).message;
+    throw new CliError(`cannot read ${what} file "${path}": ${why}`);
+  }
+}
+
+function parseInit(text: string | undefined, modelId: string, stateSize: number, names: readonly string[]): InitialCondition {
+  if (text === undefined || text === 'entrained') return { kind: 'entrained' };
+  const parts = text.split(',').map((s) => s.trim());
+  const values = parts.map(Number);
+  if (parts.length !== stateSize || parts.some((p) => p === '') || values.some((v) => !Number.isFinite(v))) {
+    throw new UsageError(`--init: expected "entrained" or ${stateSize} numbers ${names.join(',')} for ${modelId}, got "${text}"`);
+  }
+  const n = values[stateSize - 1] as number;
+  if (n < 0 || n > 1) throw new UsageError(`--init: n (Process L) must be within 0–1, got ${n}`);
+  if (modelId === 'hfb19-sp' && !((values[0] as number) > 0)) throw new UsageError(`--init: R must be > 0 for hfb19-sp, got ${values[0]}`);
+  return { kind: 'state', pacemaker: values };
+}
+
+const round = (v: number, digits = 3) => Math.round(v * 10 ** digits) / 10 ** digits;
+const clock = (t: number) => {
+  const m = Math.round((((t % 24) + 24) % 24) * 60);
+  return `${String(Math.floor(m / 60) % 24).padStart(2, '0')}:${String(m % 60).padStart(2, '0')}`;
+};
+
+export const simulateCommand: Command = {
+  name: 'simulate',
+  summary: 'Body clock (CBTmin, DLMO), melatonin suppression and sleepiness (KSS) from a light series',
+  usage: `<light.csv> --days <n> [--model <${PACEMAKER_IDS.join('|')}>] [--init entrained|<x,xc,n>] [--sleep <csv>] [--alarm <hour>]`,
+  options: {
+    days: { type: 'string' },
+    model: { type: 'string' },
+    init: { type: 'string' },
+    sleep: { type: 'string' },
+    alarm: { type: 'string' },
+  },
+  async run(ctx: CommandContext): Promise<number> {
+    const [lightPath] = positionals(ctx, ['light.csv']) as [string];
+    const days = requiredNumberOption(ctx, 'days');
+    if (!Number.isInteger(days) || days < 1 || days > MAX_DAYS) throw new UsageError(`--days: a whole number of days from 1 to ${MAX_DAYS}, got ${days}`);
+    const modelId = stringOption(ctx, 'model') ?? DEFAULT_PACEMAKER_ID;
+    if (!isPacemakerId(modelId)) throw new UsageError(`--model: unknown model "${modelId}"; choose one of ${PACEMAKER_IDS.join(', ')} (see zeitlight models)`);
+    const model = createPacemaker(modelId);
+    const init = parseInit(stringOption(ctx, 'init'), modelId, model.stateSize, model.stateNames);
+    const alarm = numberOption(ctx, 'alarm');
+    if (alarm !== undefined && !(alarm >= 0 && alarm < 24)) throw new UsageError(`--alarm: a clock hour from 0 to below 24, got ${alarm}`);
+    const sleepPath = stringOption(ctx, 'sleep');
+    if (sleepPath !== undefined && alarm !== undefined) throw new UsageError('--alarm applies to predicted sleep only; leave it out when --sleep is given');
+
+    let light;
+    let sleep: SleepSpec;
+    try {
+      light = parseLightCsv(readText(lightPath, 'light'), lightPath);
+      sleep =
+        sleepPath === undefined
+          ? { mode: 'free', ...(alarm === undefined ? {} : { alarm_h: alarm }) }
+          : { mode: 'prescribed', episodes: parseSleepCsv(readText(sleepPath, 'sleep'), sleepPath) };
+    } catch (err) {
+      if (err instanceof BodyClockInputError) throw new CliError(err.message);
+      throw err;
+    }
+
+    const r = runBodyClock({ modelId, light, days, sleep, init });
+    const lastRow_h = light.start_h[light.start_h.length - 1] as number;
+    const warnings: string[] = [];
+    if (lastRow_h < 24 * days - 24) {
+      warnings.push(`the light series ends at hour ${lastRow_h}; its last value (${light.level[light.level.length - 1]} ${light.unit === 'native_lx' ? 'lux' : 'lx melanopic EDI'}) holds to the end of day ${days - 1}`);
+    }
+    const result = {
+      model: r.model,
+      xmin_h: r.xmin_h.map((v) => round(v)),
+      cbtmin_h: r.cbtmin_h.map((v) => round(v)),
+      dlmo_h: r.dlmo_h.map((v) => round(v)),
+      melatonin_suppression_pct: r.melatonin_suppression_pct.map((v) => (v === null ? null : round(v, 2))),
+      kss_hourly: r.kss_hourly.map((v) => (v === null ? null : round(v, 2))),
+      kss_sleepy_hours: r.kss_sleepy_hours,
+      sleep_episodes: r.sleep_episodes.map((e) => ({ start_h: round(e.start_h), end_h: round(e.end_h) })),
+      entrainment: r.entrainment ?? null,
+      input: { light: lightPath, light_unit: light.unit, sleep: sleepPath ?? (alarm === undefined ? 'predicted' : `predicted, alarm ${alarm} h`), days },
+      warnings,
+      definitions: {
+        cbtmin_h: `x minimum + ${model.marker.cbtminOffset_h} h (model's phase-reference offset)`,
+        dlmo_h: `CBTmin − ${DLMO_BEFORE_CBTMIN_H} h`,
+        melatonin_suppression_pct: 'acute: 100·(1 − plasma melatonin area / area of the same person in dim light), per night from synthesis onset to the next onset; null when there is no melatonin to suppress',
+        kss_hourly: 'mean KSS (Postnova et al. 2018) over each hour awake since t = 0; null when asleep the whole hour; ≥ 7 is sleepy',
+      },
+      caution: HEALTH_CAUTION,
+    };
+    if (ctx.json) {
+      printJson(ctx, result);
+      return 0;
+    }
+    ctx.stdout(`Model: ${model.label} (${modelId})\n\n`);
+    const rows = r.cbtmin_h.map((c) => [String(Math.floor(c / 24)), clock(c), clock(c - DLMO_BEFORE_CBTMIN_H)]);
+    ctx.stdout(formatTable(['day', 'CBTmin', 'DLMO'], rows));
+    ctx.stdout(`\nMelatonin suppression per night (%): ${result.melatonin_suppression_pct.map((v) => (v === null ? 'n/a' : v.toFixed(1))).join(', ') || 'none'}\n`);
+    ctx.stdout(`Hours at KSS ≥ 7: ${r.kss_sleepy_hours.length}\n`);
+    for (const w of warnings) ctx.stdout(`Note: ${w}\n`);
+    ctx.stdout(`\n${HEALTH_CAUTION}\n`);
+    return 0;
+  },
+};

@@ -47,6 +47,7 @@ export function createFjkCubic(person: PersonParams = {}, variant: 'f99' | 'sf14
     processL,
     parameters: { mu, k, b, tau_h: tau, periodCorrection: P.periodCorrection },
     tau_h: tau,
+    lightSensitivity: person.lightSensitivity ?? 1,
     marker: { kind: 'x-min', cbtminOffset_h: P.cbtminOffset_h },
     // Seed from public code (Skeldon et al. 2023 supplement), in Forger letters.
     seedState: [-0.5574, 0.8805, 0.5],

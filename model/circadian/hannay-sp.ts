@@ -63,6 +63,7 @@ export function createHannaySp(person: PersonParams = {}): Pacemaker {
     processL,
     parameters: { tau0_h: (2 * Math.PI) / omega0, K, gamma, beta1, A1, A2, betaL1, betaL2, sigma, tau_h: tau },
     tau_h: tau,
+    lightSensitivity: person.lightSensitivity ?? 1,
     marker: { kind: 'angle', angle_rad: -Math.PI, cbtminOffset_h: 0 },
     seedState: [0.8, 0, 0],
     derivatives(y, I, dydt) {

@@ -43,6 +43,7 @@ export function createJfkX7(person: PersonParams = {}, processL: ProcessLParams 
     processL,
     parameters: { mu, q, k, b, tau_h: tau, periodCorrection: P.periodCorrection },
     tau_h: tau,
+    lightSensitivity: person.lightSensitivity ?? 1,
     marker: { kind: 'x-min', cbtminOffset_h: P.cbtminOffset_h },
     seedState: [-0.5, -0.86, 0.3],
     derivatives(y, I, dydt) {

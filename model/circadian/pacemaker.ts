@@ -33,6 +33,8 @@ export interface Pacemaker {
   /** Published parameters of the oscillator, with units in the names where they have one. */
   readonly parameters: Readonly<Record<string, number>>;
   readonly tau_h: number;
+  /** Per-person light-sensitivity multiplier on the native-lux input (PersonParams). */
+  readonly lightSensitivity: number;
   readonly marker: MarkerRule;
   /** A state on or near the limit cycle, used to seed entrainment. */
   readonly seedState: readonly number[];

@@ -45,6 +45,7 @@ export interface SimulationOptions {
   readonly end_h: number;
   /** Continue from this state (its time is the start). Default: the model's seed. */
   readonly initial?: SimState;
+  /** Overrides the pacemaker's own light-sensitivity multiplier. */
   readonly lightSensitivity?: number;
   readonly eyelidTransmission?: number;
   readonly integrator?: Integrator;
@@ -204,7 +205,7 @@ export function simulate(opts: SimulationOptions): SimulationRun {
   const alarm = opts.sleep.mode === 'free' ? opts.sleep.alarm_h : undefined;
   const episodes = opts.sleep.mode === 'prescribed' ? normalisedEpisodes(opts.sleep.episodes) : [];
   const tools = phaseTools(model);
-  const sens = opts.lightSensitivity ?? 1;
+  const sens = opts.lightSensitivity ?? model.lightSensitivity;
   if (!(sens > 0)) throw new Error(`lightSensitivity must be > 0 (got ${sens})`);
   const eyelid = opts.eyelidTransmission ?? DEFAULT_EYELID_TRANSMISSION;
   if (!(eyelid >= 0 && eyelid <= 1)) throw new Error(`eyelidTransmission must be within 0–1 (got ${eyelid})`);

@@ -1,0 +1,130 @@
+/**
+ * The body-clock entry point for the rest of the product (scenario pipeline, CLI, cohorts):
+ * light at the eye over days → phase markers, melatonin, sleep, sleep pressure and KSS, for one
+ * person and one pacemaker model.
+ *
+ * Phase markers per day: the x minimum (model's own variable), CBTmin = x-min + the model's
+ * offset (x⁷: 0.8 h; cubic: 0; Hannay: ψ ≡ π), DLMO = CBTmin − 7 h (Hannay 2019 marker
+ * convention: DLMO at ψ = 5π/12, CBTmin at ψ = π, i.e. 7 h apart; used for every model).
+ */
+import type { Integrator } from '../solver/integrator.js';
+import { entrain, dailySleepPattern, type EntrainResult } from './entrain.js';
+import type { LightSeries } from './light-series.js';
+import type { MelatoninNight } from './melatonin-pass.js';
+import type { PersonParams } from './pacemaker.js';
+import { createPacemaker, DEFAULT_PACEMAKER_ID, type PacemakerId } from './registry.js';
+import { KSS_SLEEPY } from './sleepiness-postnova.js';
+import type { SleepEpisode, SleepSpec } from './sleep-input.js';
+import { simulate, stateFromPacemaker, type SimState, type SimulationRun } from './simulate.js';
+
+/** DLMO = CBTmin − 7 h (Hannay 2019 marker convention; the ~7 h itself is from memory in the literature notes). */
+export const DLMO_BEFORE_CBTMIN_H = 7;
+
+export type InitialCondition =
+  | { readonly kind: 'entrained' }
+  /** Explicit pacemaker variables (x, xc, n; for hfb19-sp: R, ψ, n) at t = 0. */
+  | { readonly kind: 'state'; readonly pacemaker: readonly number[]; readonly asleep?: boolean }
+  /** Continue from a saved simulation state (rebased to t = 0). */
+  | { readonly kind: 'continue'; readonly state: SimState };
+
+export interface BodyClockInput {
+  readonly modelId?: PacemakerId;
+  /** Light at the eye from t = 0 (local midnight of day 0); the last value holds to the end. */
+  readonly light: LightSeries;
+  readonly days: number;
+  /** Prescribed sleep or free (predicted) sleep; default free without alarm. */
+  readonly sleep?: SleepSpec;
+  /** Default entrained to day 0 of the light and sleep. */
+  readonly init?: InitialCondition;
+  readonly person?: PersonParams;
+  /** Fraction of light reaching the eye in sleep (default 0). */
+  readonly eyelidTransmission?: number;
+  readonly integrator?: Integrator;
+  /** Sample spacing for curves (h, default 0.25). */
+  readonly sampleStep_h?: number;
+}
+
+export interface BodyClockResult {
+  readonly model: PacemakerId;
+  readonly xmin_h: number[];
+  readonly cbtmin_h: number[];
+  readonly dlmo_h: number[];
+  /** Acute suppression per night (%), null where the dim-light reference is ~0. */
+  readonly melatonin_suppression_pct: (number | null)[];
+  /** Mean KSS of each clock hour while awake; null for hours spent asleep. */
+  readonly kss_hourly: (number | null)[];
+  /** Hour indices with KSS ≥ 7 (sleepy, common practice). */
+  readonly kss_sleepy_hours: number[];
+  readonly sleep_episodes: SleepEpisode[];
+  readonly melatonin_nights: MelatoninNight[];
+  readonly entrainment?: { readonly days: number; readonly converged: boolean };
+  /** The full run (samples, final state, solver counts). */
+  readonly run: SimulationRun;
+}
+
+/** Minimum dim-light melatonin area (pmol·h/L) for a night's % suppression to be reported. */
+export const MIN_NIGHT_AUC = 1;
+
+export function hourlyKss(run: SimulationRun, hours: number): (number | null)[] {
+  const out: (number | null)[] = new Array<number | null>(hours).fill(null);
+  const sum = new Array<number>(hours).fill(0);
+  const count = new Array<number>(hours).fill(0);
+  run.samples.t_h.forEach((t, i) => {
+    const k = Math.floor(t - run.start_h + 1e-9);
+    const v = run.samples.kss[i] as number;
+    if (k >= 0 && k < hours && Number.isFinite(v) && t < run.start_h + k + 1 - 1e-9) {
+      sum[k] = (sum[k] as number) + v;
+      count[k] = (count[k] as number) + 1;
+    }
+  });
+  for (let k = 0; k < hours; k++) if ((count[k] as number) > 0) out[k] = (sum[k] as number) / (count[k] as number);
+  return out;
+}
+
+export function runBodyClock(input: BodyClockInput): BodyClockResult {
+  if (!(Number.isInteger(input.days) && input.days >= 1)) throw new Error(`days must be a whole number ≥ 1 (got ${input.days})`);
+  const modelId = input.modelId ?? DEFAULT_PACEMAKER_ID;
+  const model = createPacemaker(modelId, input.person ?? {});
+  const sleep: SleepSpec = input.sleep ?? { mode: 'free' };
+  const init = input.init ?? { kind: 'entrained' };
+  let initial: SimState;
+  let entrainment: EntrainResult | undefined;
+  if (init.kind === 'entrained') {
+    const daySleep: SleepSpec = sleep.mode === 'prescribed' ? { mode: 'prescribed', episodes: dailySleepPattern(sleep.episodes) } : sleep;
+    entrainment = entrain({
+      model,
+      light: input.light,
+      sleep: daySleep,
+      ...(input.eyelidTransmission === undefined ? {} : { eyelidTransmission: input.eyelidTransmission }),
+      ...(input.integrator === undefined ? {} : { integrator: input.integrator }),
+    });
+    initial = entrainment.state;
+  } else if (init.kind === 'state') {
+    initial = stateFromPacemaker(model, init.pacemaker, sleep, 0, init.asleep !== true);
+  } else initial = init.state;
+
+  const run = simulate({
+    model,
+    light: input.light,
+    sleep,
+    initial,
+    end_h: 24 * input.days,
+    ...(input.eyelidTransmission === undefined ? {} : { eyelidTransmission: input.eyelidTransmission }),
+    ...(input.integrator === undefined ? {} : { integrator: input.integrator }),
+    ...(input.sampleStep_h === undefined ? {} : { sampleStep_h: input.sampleStep_h }),
+  });
+  const kss = hourlyKss(run, 24 * input.days);
+  return {
+    model: modelId,
+    xmin_h: run.xmin_h,
+    cbtmin_h: run.cbtmin_h,
+    dlmo_h: run.cbtmin_h.map((t) => t - DLMO_BEFORE_CBTMIN_H),
+    melatonin_suppression_pct: run.nights.map((n) => (n.dimAuc_pmol_h_L >= MIN_NIGHT_AUC && Number.isFinite(n.acuteSuppression_pct) ? n.acuteSuppression_pct : null)),
+    kss_hourly: kss,
+    kss_sleepy_hours: kss.flatMap((v, k) => (v !== null && v >= KSS_SLEEPY ? [k] : [])),
+    sleep_episodes: run.sleepEpisodes,
+    melatonin_nights: run.nights,
+    ...(entrainment === undefined ? {} : { entrainment: { days: entrainment.days, converged: entrainment.converged } }),
+    run,
+  };
+}
