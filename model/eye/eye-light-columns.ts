@@ -50,14 +50,3 @@ export function addResponse2(c: QuantityColumns, total: QuantityColumns, i: numb
   addResponse(c, i, lux, r);
   addResponse(total, i, lux, r);
 }
-
-export function sumColumns(parts: readonly QuantityColumns[], n: number): QuantityColumns {
-  const out = emptyQuantityColumns(n);
-  const keys = Object.keys(out) as (keyof QuantityColumns)[];
-  for (const p of parts) for (const k of keys) {
-    const o = out[k];
-    const s = p[k];
-    for (let i = 0; i < n; i++) o[i] = (o[i] as number) + (s[i] as number);
-  }
-  return out;
-}

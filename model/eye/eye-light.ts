@@ -150,11 +150,7 @@ export function evaluateEyeLight(room: PreparedRoom, c: OutdoorConditions, occ: 
     const place = occ.place[i] as number;
     const worn = (room.eyewearWorn[minuteOfDay] as number) === 1 ? 1 : 0;
     const cct = c.daylightCct_K !== undefined ? (c.daylightCct_K[i] as number) : 6504;
-    if (place === PLACE_OUTDOORS) {
-      if (c.outdoorEye_lx !== undefined) addResponse2(outdoor, total, i, c.outdoorEye_lx[i] as number, room.outdoorDaylight[worn].at(cct));
-      wasInRoom = false;
-      continue;
-    }
+    if (place === PLACE_OUTDOORS && c.outdoorEye_lx !== undefined) addResponse2(outdoor, total, i, c.outdoorEye_lx[i] as number, room.outdoorDaylight[worn].at(cct));
     const inRoom = place === PLACE_ROOM;
     const arrival = inRoom && !wasInRoom && !arrivedToday;
     if (arrival) arrivedToday = true;
