@@ -27,6 +27,8 @@ export interface CohortRunOptions<J> {
   /** Stop rule; without it every job runs (checkpoints are still reported if given). */
   convergence?: ConvergenceOptions & { stopWhenConverged: boolean };
   onProgress?: (progress: CohortProgress) => void;
+  /** Cancels the run (the promise rejects). */
+  signal?: AbortSignal;
 }
 
 export interface CohortRun {
@@ -46,6 +48,7 @@ export async function runCohortPool<J>(options: CohortRunOptions<J>): Promise<Co
     jobModule: options.jobModule,
     ...(options.exportName === undefined ? {} : { exportName: options.exportName }),
     ...(options.workers === undefined ? {} : { workers: options.workers }),
+    ...(options.signal === undefined ? {} : { signal: options.signal }),
     onResult: (event, control) => {
       if (event.result.occupantIndex !== event.index) {
         throw new Error(`job ${event.index} returned the outcome of occupant ${event.result.occupantIndex}`);

@@ -11,7 +11,7 @@
  */
 import { existsSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
-import { fileURLToPath } from 'node:url';
+import { fileURLToPath, pathToFileURL } from 'node:url';
 import { Worker } from 'node:worker_threads';
 import type { HostMessage, JobMessage, WorkerHostData } from './messages.js';
 
@@ -39,6 +39,8 @@ export interface JobPoolOptions<J, R> {
   workers?: number;
   /** Called on the main thread as each job finishes (in completion order). */
   onResult?: (event: JobResultEvent<R>, control: JobPoolControl) => void;
+  /** Cancels the run: workers are stopped and the promise rejects with a WorkerPoolError. */
+  signal?: AbortSignal;
 }
 
 export interface JobPoolRun<R> {
@@ -78,7 +80,7 @@ const HOST_URL = new URL('./worker-host.js', import.meta.url);
 function toFileUrl(module: URL | string): string {
   if (module instanceof URL) return module.href;
   if (module.startsWith('file:')) return module;
-  return new URL(`file://${module.startsWith('/') ? '' : '/'}${module.replaceAll('\\', '/')}`).href;
+  return pathToFileURL(module).href;
 }
 
 export async function runJobPool<J, R>(options: JobPoolOptions<J, R>): Promise<JobPoolRun<R>> {
@@ -96,6 +98,7 @@ export async function runJobPool<J, R>(options: JobPoolOptions<J, R>): Promise<J
   if (!existsSync(fileURLToPath(jobModuleUrl))) {
     throw new WorkerPoolError(`job module ${fileURLToPath(jobModuleUrl)} not found (workers load compiled .js; build first)`);
   }
+  if (options.signal?.aborted === true) throw new WorkerPoolError('job run cancelled before it started');
   const workerCount = Math.min(requested, total);
   const hostData: WorkerHostData = { jobModuleUrl, exportName: options.exportName ?? 'runJob' };
 
@@ -109,9 +112,11 @@ export async function runJobPool<J, R>(options: JobPoolOptions<J, R>): Promise<J
     const workers: Worker[] = [];
     const running = new Map<Worker, number>();
 
+    const onAbort = (): void => finish(new WorkerPoolError(`cancelled after ${completed} of ${limit} jobs`));
     const finish = (error: Error | null): void => {
       if (settled) return;
       settled = true;
+      options.signal?.removeEventListener('abort', onAbort);
       for (const w of workers) void w.terminate();
       if (error !== null) reject(error);
       else resolve({ results: results.slice(0, limit), workers: workerCount, stoppedEarly: limit < total });
@@ -140,6 +145,7 @@ export async function runJobPool<J, R>(options: JobPoolOptions<J, R>): Promise<J
       }
     };
 
+    options.signal?.addEventListener('abort', onAbort);
     for (let k = 0; k < workerCount; k++) {
       const w = new Worker(HOST_URL, { workerData: hostData });
       workers.push(w);

@@ -95,4 +95,20 @@ describe('worker pool', () => {
     const run = await pool.runJobPool({ jobs: [], jobModule: compiled.url('cli/workers/self-check-job.ts') });
     expect(run).toEqual({ results: [], workers: 0, stoppedEarly: false });
   });
+
+  it('can be cancelled while running, naming how far it got', async () => {
+    const controller = new AbortController();
+    await expect(
+      pool.runJobPool<SelfCheckJob, SelfCheckResult>({
+        jobs: jobs(30),
+        jobModule: compiled.url('cli/workers/self-check-job.ts'),
+        workers: 2,
+        signal: controller.signal,
+        onResult: (e) => {
+          if (e.completed === 3) controller.abort();
+        },
+      }),
+    ).rejects.toThrow(/cancelled after 3 of 30 jobs/);
+    await expect(pool.runJobPool({ jobs: [1], jobModule: compiled.url('cli/workers/self-check-job.ts'), signal: controller.signal })).rejects.toThrow(/cancelled before it started/);
+  });
 });
