@@ -35,12 +35,12 @@ export const segmentSchema = z
     eyewear: idSchema.optional().describe('Eyewear worn: one of the persona\'s eyewear items.'),
     note: z.string().max(500).optional(),
   })
-  .describe('A stretch of time in one place doing one thing.');
+  .describe('A stretch of time in one place doing one thing.')
+  .meta({ id: 'Segment' });
 
-export const dayPlanSchema = z.union([
-  z.array(segmentSchema).describe('The day\'s segments in order.'),
-  idSchema.describe('Name of one of the persona\'s day templates.'),
-]);
+export const dayPlanSchema = z
+  .union([z.array(segmentSchema).describe('The day\'s segments in order.'), idSchema.describe('Name of one of the persona\'s day templates.')])
+  .meta({ id: 'DayPlan' });
 
 export const weekSchema = z
   .strictObject({

@@ -19,7 +19,8 @@ export const spectrumRefSchema = z
       cool_K: z.number().min(1000).max(25000).describe('CCT of the cool channel.'),
     }),
   ])
-  .describe('Spectrum of a light source.');
+  .describe('Spectrum of a light source.')
+  .meta({ id: 'SpectrumRef' });
 
 export const scheduleEntrySchema = z
   .strictObject({
@@ -29,7 +30,8 @@ export const scheduleEntrySchema = z
     cct_K: z.number().min(1000).max(25000).optional().describe('Target CCT for a tunable luminaire.'),
     days: z.array(weekdaySchema).optional().describe('Weekdays this entry applies to; all days when absent.'),
   })
-  .describe('A period when a luminaire is on at a given level.');
+  .describe('A period when a luminaire is on at a given level.')
+  .meta({ id: 'ScheduleEntry' });
 
 export const luminaireSchema = z
   .strictObject({
@@ -39,7 +41,8 @@ export const luminaireSchema = z
     eyeIlluminance_lx: z.number().min(0).max(100000).describe('Vertical illuminance at the eye at full output, level gaze (lx).'),
     schedule: z.array(scheduleEntrySchema).default([]).describe('When it is on; off outside these periods.'),
   })
-  .describe('Electric light in a room, described by what it delivers at the eye.');
+  .describe('Electric light in a room, described by what it delivers at the eye.')
+  .meta({ id: 'Luminaire' });
 
 export const screenSchema = z
   .strictObject({
@@ -55,7 +58,8 @@ export const screenSchema = z
       .optional()
       .describe('Warm "night" colour setting between these times.'),
   })
-  .describe('A screen: fixed in a room or carried by a person.');
+  .describe('A screen: fixed in a room or carried by a person.')
+  .meta({ id: 'Screen' });
 
 export const windowSchema = z
   .strictObject({
@@ -77,7 +81,8 @@ export const blindsSchema = z
     threshold_W_m2: z.number().min(0).max(1500).default(200).describe('Solar irradiance on the window that lowers automatic blinds.'),
     loweredTransmittance: fractionSchema.default(0.25).describe('Share of diffuse daylight passing lowered blinds.'),
   })
-  .describe('How the blinds are used.');
+  .describe('How the blinds are used.')
+  .meta({ id: 'Blinds' });
 
 export const reflectancesSchema = z
   .strictObject({ ceiling: fractionSchema.default(0.8), walls: fractionSchema.default(0.5), floor: fractionSchema.default(0.2) })
