@@ -40,3 +40,4 @@ export { clockTimeToMinutes, minutesToClockTime, clockSpan, MINUTES_PER_DAY } fr
 export { wallTimeToUtc_ms, utcToWallTime, utcOffsetAt_min, isValidTimeZone, addDays, daysBetween, isoWeekday } from './time/local-calendar.js';
 
 export { DEMO_SCENARIO } from './demo/demo-scenario.js';
+export { exposureContext, luminaireOutputAt, clockWindowHolds, eyewearFilter, EYEWEAR_DEFAULTS, type ExposureContext, type EyewearFilter } from './timeline/exposure-context.js';
