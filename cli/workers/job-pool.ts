@@ -139,7 +139,11 @@ export async function runJobPool<J, R>(options: JobPoolOptions<J, R>): Promise<J
         const index = nextIndex++;
         running.set(w, index);
         const message: JobMessage = { type: 'job', index, job: options.jobs[index] };
-        w.postMessage(message);
+        try {
+          w.postMessage(message);
+        } catch (e) {
+          finish(new WorkerPoolError(`job ${index} cannot be sent to a worker: ${e instanceof Error ? e.message : String(e)}`));
+        }
       } else {
         running.delete(w);
       }
@@ -152,9 +156,13 @@ export async function runJobPool<J, R>(options: JobPoolOptions<J, R>): Promise<J
       w.on('message', (message: HostMessage) => {
         if (settled) return;
         if (message.type === 'load-error') return finish(new WorkerPoolError(message.message));
-        if (message.type === 'job-error') return finish(new JobFailedError(message.index, message.message, message.stack));
         const index = message.index;
         running.delete(w);
+        if (message.type === 'job-error') {
+          // A job beyond an early stop is no longer needed; its failure does not fail the run.
+          if (index < limit) return finish(new JobFailedError(index, message.message, message.stack));
+          return dispatch(w);
+        }
         if (index < limit && received[index] === 0) {
           received[index] = 1;
           results[index] = message.result as R;

@@ -111,4 +111,9 @@ describe('worker pool', () => {
     ).rejects.toThrow(/cancelled after 3 of 30 jobs/);
     await expect(pool.runJobPool({ jobs: [1], jobModule: compiled.url('cli/workers/self-check-job.ts'), signal: controller.signal })).rejects.toThrow(/cancelled before it started/);
   });
+
+  it('says which job cannot be sent when a job is not cloneable', async () => {
+    const bad = [{ f: () => 1 }];
+    await expect(pool.runJobPool({ jobs: bad, jobModule: compiled.url('cli/workers/self-check-job.ts'), workers: 1 })).rejects.toThrow(/job 0 cannot be sent to a worker/);
+  });
 });
