@@ -40,6 +40,7 @@ function checkConditions(c: OutdoorConditions, occ: Occupancy): number {
     ['diffuseHorizontal_lx', c.diffuseHorizontal_lx, 0, 2e5],
     ['directNormal_W_m2', c.directNormal_W_m2, 0, 1500],
     ['daylightCct_K', c.daylightCct_K, 1000, 1e5],
+    ['sunCct_K', c.sunCct_K, 1000, 1e5],
     ['skyType', c.skyType, 1, 15],
     ['perezEpsilon', c.perezEpsilon, 0.5, 100],
     ['snowOnGround', c.snowOnGround, 0, 1],
@@ -200,7 +201,9 @@ export function evaluateEyeLight(room: PreparedRoom, c: OutdoorConditions, occ: 
       if (state === BLIND_OPEN) {
         const reflected = w.reflectedPerFlux * ((planeSky + planeSun) * room.rhoLower + planeGround * room.rhoUpper);
         const sunEye = sunThroughGlass > 0 && g !== undefined && rayPassesAperture(wc.eye, sx, sy, sz, nw) ? sunThroughGlass * Math.max(0, sx * g.x + sy * g.y + sz * g.z) : 0;
-        eye = edh * (lerpAt(q[0] as Float64Array, k, t) + lerpAt(q[1] as Float64Array, k, t) * obsF) + groundLum * wc.eye.ground + sunEye + reflected;
+        eye = edh * (lerpAt(q[0] as Float64Array, k, t) + lerpAt(q[1] as Float64Array, k, t) * obsF) + groundLum * wc.eye.ground + reflected;
+        // Direct sun carries its own spectrum when the outdoor side gives a sun CCT.
+        if (inRoom && sunEye > 0) addResponse2(daylight, total, i, sunEye, c.sunCct_K !== undefined ? w.daylight[worn].at(c.sunCct_K[i] as number) : resp);
         desk = edh * (lerpAt(q[2] as Float64Array, k, t) + lerpAt(q[3] as Float64Array, k, t) * obsF) + groundLum * wc.desk.ground + sunDesk + reflected;
       } else {
         const transmitted = (w.shading.transmittance[state] as number) * (planeSky + planeSun + planeGround);

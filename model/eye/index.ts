@@ -11,3 +11,4 @@ export { displaySpectra, screenEyeIlluminance_lx, type ScreenSpec } from './scre
 export { type GlazingSpec, type ObstructionSpec, type WallRelativePoint, type WindowSpec } from './window-geometry.js';
 export { CIE_SKY_TYPES, SKY_CLEAR, SKY_OVERCAST, SKY_UNIFORM, cieSkyParameters, relativeSkyLuminance } from './cie-general-sky.js';
 export { sourceResponse, type SourceResponse } from './source-response.js';
+export { outdoorConditionsFromDaylightSeries } from './from-daylight-series.js';

@@ -63,8 +63,10 @@ export interface OutdoorConditions {
   readonly diffuseHorizontal_lx: Float64Array;
   /** Direct normal irradiance (W/m²) for the blinds rule; if absent, E_bn / 100 lm/W (light-at-eye.md §2.3 quick fallback, from memory). */
   readonly directNormal_W_m2?: Float64Array;
-  /** Daylight CCT (K) for the CIE D-series spectrum; default 6504 K (D65). */
+  /** Daylight CCT (K) for the CIE D-series spectrum of sky, ground and reflected light; default 6504 K (D65). */
   readonly daylightCct_K?: Float64Array;
+  /** CCT (K) of direct sun seen through a window; default daylightCct_K. */
+  readonly sunCct_K?: Float64Array;
   /** CIE general sky type 1–15 per minute; else from Perez ε (given, or computed from the illuminances). */
   readonly skyType?: Uint8Array;
   readonly perezEpsilon?: Float64Array;
