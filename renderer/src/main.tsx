@@ -1,4 +1,33 @@
+// Renderer entry: starts the workspace with the desktop API of this environment.
+import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
+import { App } from './App.js';
+import { WorkspaceContext } from './state/workspace-context.js';
+import { WorkspaceController } from './state/workspace-controller.js';
+import { desktopApi } from './desktop/desktop-api.js';
+import { syntheticResultsView } from './results/synthetic-view.js';
+import './styles.css';
 
+const controller = new WorkspaceController(desktopApi());
 const container = document.getElementById('root');
-if (container !== null) createRoot(container).render(<p>Zeitlight</p>);
+if (container !== null) {
+  createRoot(container).render(
+    <StrictMode>
+      <WorkspaceContext.Provider value={controller}>
+        <App />
+      </WorkspaceContext.Provider>
+    </StrictMode>,
+  );
+}
+
+void controller.start().then(() => {
+  // Layout check of the results views with clearly labelled synthetic data (web mode only).
+  if (desktopApi().platform === 'web' && new URLSearchParams(window.location.search).get('layout-check') === 'synthetic') {
+    controller.store.setResults({ status: 'ready', view: syntheticResultsView(7), synthetic: true });
+  }
+});
+
+window.addEventListener('beforeunload', (event) => {
+  const state = controller.store.getSnapshot();
+  if (desktopApi().platform === 'web' && state.history.present !== null && state.history.present !== state.saved) event.preventDefault();
+});

@@ -1,8 +1,8 @@
 // CSV export of the comparison table: one line per metric × strategy, with the value, the
 // difference versus baseline and the reading. Quoting by papaparse (RFC 4180 style).
 import Papa from 'papaparse';
-import type { NamedItem } from '../results/view-model.js';
-import { formatNumber, type ComparisonRow } from './comparison-data.js';
+import type { NamedItem, ResultsView } from '../results/view-model.js';
+import { comparisonRows, formatNumber, type ComparisonRow } from './comparison-data.js';
 
 export const COMPARISON_CSV_HEADER = ['persona', 'metric', 'unit', 'strategy', 'value', 'difference_vs_baseline', 'reading'] as const;
 
@@ -20,4 +20,14 @@ export function comparisonCsv(personaName: string, rows: readonly ComparisonRow[
     ]),
   );
   return `${Papa.unparse({ fields: [...COMPARISON_CSV_HEADER], data }, { newline: '\n' })}\n`;
+}
+
+/** CSV of every persona's comparison, one header line. */
+export function resultsComparisonCsv(view: ResultsView): string {
+  const lines = view.personas.map((persona) => {
+    const runs = view.runs.filter((r) => r.personaId === persona.id);
+    const strategies = view.strategies.filter((s) => runs.some((r) => r.strategyId === s.id));
+    return comparisonCsv(persona.name, comparisonRows(runs, strategies, view.baselineId), strategies).split('\n').slice(1).join('\n');
+  });
+  return `${COMPARISON_CSV_HEADER.join(',')}\n${lines.filter((l) => l.trim() !== '').join('')}`;
 }

@@ -1,0 +1,174 @@
+// The workspace: build the scenario on the left (Site, Places, People, Strategies), read the
+// results (Light at the eye, Body clock, Melatonin, Sleepiness, Sleep, Compare).
+import { useEffect, useState } from 'react';
+import { useController, useWorkspace } from './state/workspace-context.js';
+import { isDirty } from './state/workspace-store.js';
+import { canRedo, canUndo } from './state/history.js';
+import { SitePanel } from './panels/SitePanel.js';
+import { PlacesPanel } from './panels/PlacesPanel.js';
+import { PeoplePanel } from './panels/PeoplePanel.js';
+import { StrategiesPanel } from './panels/StrategiesPanel.js';
+import { ResultsFrame, type ResultsSelection } from './views/ResultsFrame.js';
+import { LightAtEyeView } from './views/LightAtEyeView.js';
+import { BodyClockView } from './views/BodyClockView.js';
+import { MelatoninView } from './views/MelatoninView.js';
+import { SleepinessView } from './views/SleepinessView.js';
+import { SleepView } from './views/SleepView.js';
+import { CompareView } from './views/CompareView.js';
+import { ProblemsList } from './components/ProblemsList.js';
+
+type ViewId = 'site' | 'places' | 'people' | 'strategies' | 'light' | 'clock' | 'melatonin' | 'sleepiness' | 'sleep' | 'compare';
+
+const BUILD: readonly { id: ViewId; label: string }[] = [
+  { id: 'site', label: 'Site' },
+  { id: 'places', label: 'Places' },
+  { id: 'people', label: 'People' },
+  { id: 'strategies', label: 'Strategies' },
+];
+const RESULTS: readonly { id: ViewId; label: string; lead: string; day: boolean }[] = [
+  { id: 'light', label: 'Light at the eye', lead: 'Melanopic EDI at the eye through one day, by source.', day: true },
+  { id: 'clock', label: 'Body clock', lead: 'Circadian phase (DLMO, CBTmin) day by day for each strategy.', day: false },
+  { id: 'melatonin', label: 'Melatonin', lead: 'Modelled melatonin through one night, with and without light.', day: true },
+  { id: 'sleepiness', label: 'Sleepiness', lead: 'Karolinska Sleepiness Scale (KSS) by hour.', day: true },
+  { id: 'sleep', label: 'Sleep', lead: 'Sleep and nap episodes for each strategy.', day: false },
+  { id: 'compare', label: 'Compare', lead: 'Strategies side by side with their differences from the baseline.', day: false },
+];
+
+function StartScreen() {
+  const controller = useController();
+  return (
+    <section className="start">
+      <h1>Zeitlight</h1>
+      <p className="panel-lead">Light at the eye, body clock, melatonin and sleepiness for buildings and the people in them.</p>
+      <div className="start-actions">
+        <button type="button" className="button button-primary" onClick={() => controller.openDemo()}>
+          Open the demo scenario
+        </button>
+        <button type="button" className="button" onClick={() => controller.newDocument()}>
+          New scenario
+        </button>
+        <button type="button" className="button" onClick={() => void controller.open()}>
+          Open a scenario file…
+        </button>
+      </div>
+    </section>
+  );
+}
+
+export function App() {
+  const controller = useController();
+  const state = useWorkspace();
+  const [view, setView] = useState<ViewId>('people');
+  const [selection, setSelection] = useState<ResultsSelection>({ personaId: '', day: 0 });
+  const scenario = state.history.present;
+  const dirty = isDirty(state);
+
+  useEffect(() => {
+    const onKey = (e: KeyboardEvent) => controller.handleKey(e);
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, [controller]);
+  useEffect(() => {
+    document.title = `${dirty ? '• ' : ''}${state.displayName} — Zeitlight`;
+  }, [dirty, state.displayName]);
+  useEffect(() => {
+    if (state.notice === null) return;
+    const t = setTimeout(() => controller.store.clearNotice(), 5000);
+    return () => clearTimeout(t);
+  }, [state.notice, controller]);
+
+  if (scenario === null) return <StartScreen />;
+  const resultsEntry = RESULTS.find((r) => r.id === view);
+  const results = state.results;
+
+  return (
+    <div className="app">
+      <header className="topbar">
+        <div className="brand" aria-label="Zeitlight">
+          <span className="brand-mark" aria-hidden="true" />
+          Zeitlight
+        </div>
+        <div className="doc-name" title={state.path ?? undefined}>
+          {state.displayName}
+          {dirty && (
+            <span className="dirty" aria-label="unsaved changes">
+              {' '}
+              •
+            </span>
+          )}
+        </div>
+        <nav className="actions" aria-label="Document">
+          <button type="button" className="button" onClick={() => void controller.open()}>
+            Open…
+          </button>
+          <button type="button" className="button" onClick={() => void controller.save('save')}>
+            Save
+          </button>
+          <button type="button" className="button" onClick={() => controller.store.undo()} disabled={!canUndo(state.history)} aria-keyshortcuts="Control+Z">
+            Undo
+          </button>
+          <button type="button" className="button" onClick={() => controller.store.redo()} disabled={!canRedo(state.history)} aria-keyshortcuts="Control+Shift+Z">
+            Redo
+          </button>
+          <button type="button" className="button" onClick={() => void controller.exportCsv()}>
+            Export CSV
+          </button>
+          <button type="button" className="button" onClick={() => void controller.exportPdf()}>
+            Briefing PDF
+          </button>
+        </nav>
+      </header>
+      {state.progressVisible && results.status === 'running' && (
+        <div className="progress" role="progressbar" aria-label="Simulation progress" aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(results.fraction * 100)}>
+          <span style={{ width: `${Math.max(3, results.fraction * 100)}%` }} />
+        </div>
+      )}
+      <div className="body">
+        <nav className="sidenav" aria-label="Workspace">
+          <p className="nav-group">Build</p>
+          {BUILD.map((b) => (
+            <button key={b.id} type="button" className={view === b.id ? 'nav-item nav-active' : 'nav-item'} aria-current={view === b.id ? 'page' : undefined} onClick={() => setView(b.id)}>
+              {b.label}
+            </button>
+          ))}
+          <p className="nav-group">Results</p>
+          {RESULTS.map((r) => (
+            <button key={r.id} type="button" className={view === r.id ? 'nav-item nav-active' : 'nav-item'} aria-current={view === r.id ? 'page' : undefined} onClick={() => setView(r.id)}>
+              {r.label}
+            </button>
+          ))}
+          <div className="nav-footer">
+            <span className={`run-state run-${results.status}`}>
+              {results.status === 'ready' ? 'Results up to date' : results.status === 'running' ? 'Simulating…' : results.status === 'failed' ? 'Needs fixes' : results.status === 'unavailable' ? 'Engine not connected' : 'Idle'}
+            </span>
+          </div>
+        </nav>
+        <main className="content">
+          <ProblemsList problems={state.problems} />
+          {view === 'site' && <SitePanel scenario={scenario} />}
+          {view === 'places' && <PlacesPanel scenario={scenario} />}
+          {view === 'people' && <PeoplePanel scenario={scenario} />}
+          {view === 'strategies' && <StrategiesPanel scenario={scenario} />}
+          {resultsEntry !== undefined && (
+            <ResultsFrame title={resultsEntry.label} lead={resultsEntry.lead} results={results} selection={selection} onSelect={setSelection} showDay={resultsEntry.day}>
+              {(v, personaId) => {
+                const day = Math.min(selection.day, v.days - 1);
+                if (view === 'light') return <LightAtEyeView view={v} personaId={personaId} day={day} />;
+                if (view === 'clock') return <BodyClockView view={v} personaId={personaId} />;
+                if (view === 'melatonin') return <MelatoninView view={v} personaId={personaId} day={day} />;
+                if (view === 'sleepiness') return <SleepinessView view={v} personaId={personaId} day={day} />;
+                if (view === 'sleep') return <SleepView view={v} personaId={personaId} />;
+                return <CompareView view={v} personaId={personaId} onExport={() => void controller.exportCsv()} />;
+              }}
+            </ResultsFrame>
+          )}
+        </main>
+      </div>
+      {state.notice !== null && (
+        <div className={`notice notice-${state.notice.tone}`} role={state.notice.tone === 'error' ? 'alert' : 'status'}>
+          {state.notice.text}
+        </div>
+      )}
+    </div>
+  );
+}

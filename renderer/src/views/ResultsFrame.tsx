@@ -1,0 +1,85 @@
+// Frame shared by every results view: state of the run, cautions, persona and day pickers.
+import type { ReactNode } from 'react';
+import type { ResultsView } from '../results/view-model.js';
+import type { ResultsState } from '../state/workspace-store.js';
+import { RESULTS_CAUTIONS } from '../results/cautions.js';
+import { formatDayLabel } from '../charts/clock.js';
+
+export interface ResultsSelection {
+  readonly personaId: string;
+  readonly day: number;
+}
+
+export function Cautions() {
+  return (
+    <aside className="cautions" aria-label="Cautions">
+      <strong>Read with care.</strong>
+      <ul>
+        {RESULTS_CAUTIONS.map((c) => (
+          <li key={c}>{c}</li>
+        ))}
+      </ul>
+    </aside>
+  );
+}
+
+export function ResultsFrame({
+  title,
+  lead,
+  results,
+  selection,
+  onSelect,
+  showDay,
+  children,
+}: {
+  title: string;
+  lead: string;
+  results: ResultsState;
+  selection: ResultsSelection;
+  onSelect: (s: ResultsSelection) => void;
+  showDay: boolean;
+  children: (view: ResultsView, personaId: string) => ReactNode;
+}) {
+  const view = results.status === 'ready' ? results.view : null;
+  const personaId = view?.personas.some((p) => p.id === selection.personaId) === true ? selection.personaId : (view?.personas[0]?.id ?? '');
+  return (
+    <section className="panel" aria-labelledby="results-title">
+      <header className="panel-header">
+        <h2 id="results-title">{title}</h2>
+        <p className="panel-lead">{lead}</p>
+      </header>
+      {results.status === 'ready' && results.synthetic && (
+        <p className="banner banner-warning" role="note">
+          Synthetic data for a layout check — not a simulation result.
+        </p>
+      )}
+      <Cautions />
+      {view !== null && (
+        <div className="results-controls">
+          <label>
+            Person
+            <select value={personaId} onChange={(e) => onSelect({ ...selection, personaId: e.target.value })}>
+              {view.personas.map((p) => (
+                <option key={p.id} value={p.id}>
+                  {p.name}
+                </option>
+              ))}
+            </select>
+          </label>
+          {showDay && (
+            <label className="day-picker">
+              Day
+              <input type="range" min={0} max={view.days - 1} value={Math.min(selection.day, view.days - 1)} onChange={(e) => onSelect({ ...selection, day: Number(e.target.value) })} />
+              <output>{formatDayLabel(view.startDate, Math.min(selection.day, view.days - 1))}</output>
+            </label>
+          )}
+        </div>
+      )}
+      {results.status === 'idle' && <p className="empty">Open or create a scenario to see results.</p>}
+      {results.status === 'running' && <p className="empty">Simulating… {results.stage}</p>}
+      {results.status === 'unavailable' && <p className="empty">{results.message}</p>}
+      {results.status === 'failed' && <p className="empty empty-error">{results.message}</p>}
+      {view !== null && <div className="results-body">{children(view, personaId)}</div>}
+    </section>
+  );
+}
