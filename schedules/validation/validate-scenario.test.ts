@@ -107,3 +107,15 @@ describe('scenario validation', () => {
     expect(v.problems.map((x) => x.path)).toEqual(['version']);
   });
 });
+
+describe('week plan sense checks', () => {
+  it('warns when a segment running past midnight collides with the next day\'s plan', () => {
+    const doc = demoCopy() as { personas: { week: Record<string, unknown> }[] };
+    const p = doc.personas[1];
+    if (p === undefined) throw new Error('demo changed');
+    p.week.sun = 'weekend'; // weekend sleep runs to 08:30 but Monday's workday starts 06:45
+    const v = validateScenarioValue(doc);
+    expect(v.ok).toBe(true);
+    expect(v.problems.map((x) => [x.severity, x.path])).toEqual([['warning', 'personas[1].templates.weekend[4].end']]);
+  });
+});

@@ -47,11 +47,26 @@ export function timingChecks(s: Scenario): ScenarioProblem[] {
       checkDayPlan(segs, persona, ['personas', i, 'templates', name], out);
       checked.add(name);
     }
-    if (persona.week === undefined) return;
-    for (const day of WEEKDAYS) {
-      const plan = persona.week[day];
+    const week = persona.week;
+    if (week === undefined) return;
+    const segsOf = (day: (typeof WEEKDAYS)[number]): readonly Segment[] => {
+      const plan = week[day];
+      return typeof plan === 'string' ? (persona.templates[plan] ?? []) : plan;
+    };
+    WEEKDAYS.forEach((day, d) => {
+      const plan = week[day];
       if (typeof plan !== 'string') checkDayPlan(plan, persona, ['personas', i, 'week', day], out);
-    }
+      // A segment running past midnight must not run into the next day's first segment.
+      const nextDay = WEEKDAYS[(d + 1) % 7] ?? 'mon';
+      const nextStart = Math.min(...segsOf(nextDay).map((seg) => clockSpan(seg.start, seg.end).start_min));
+      segsOf(day).forEach((seg, k) => {
+        const spill = clockSpan(seg.start, seg.end).end_min - MINUTES_PER_DAY;
+        if (spill > 0 && nextStart < spill) {
+          const where: PathPart[] = typeof plan === 'string' ? ['personas', i, 'templates', plan, k, 'end'] : ['personas', i, 'week', day, k, 'end'];
+          out.push(problem('warning', where, `on ${day} this segment runs to ${seg.end} on ${nextDay}, but ${nextDay}'s plan starts earlier; ${nextDay}'s plan is used from its start`, `End the segment when ${nextDay}'s plan begins, or start ${nextDay}'s plan later.`));
+        }
+      });
+    });
   });
   s.places.forEach((pl, i) => {
     if (pl.kind !== 'room') return;
