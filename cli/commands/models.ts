@@ -7,6 +7,7 @@ import { formatTable, HEALTH_CAUTION, printJson } from '../output.js';
 import { DLMO_BEFORE_CBTMIN_H } from '../../model/circadian/body-clock.js';
 import { calibrationMelanopicDer, CALIBRATION_ILLUMINANT } from '../../model/circadian/calibration.js';
 import { ST_HILAIRE_MELATONIN } from '../../model/circadian/melatonin-sthilaire.js';
+import { MELATONIN_PROCESS_L } from '../../model/circadian/melatonin-pass.js';
 import { createPacemaker, DEFAULT_PACEMAKER_ID, PACEMAKER_IDS } from '../../model/circadian/registry.js';
 import { HCL_PRESETS } from '../../model/circadian/sleep-switch-hcl.js';
 import { POSTNOVA_2018 } from '../../model/circadian/sleepiness-postnova.js';
@@ -35,7 +36,7 @@ export const modelsCommand: Command = {
     });
     const doc = {
       pacemakers,
-      melatonin: { id: 'sthilaire07-melatonin', source: 'St Hilaire, Gronfier, Zeitzer & Klerman 2007 J Pineal Res 43:294', parameters: ST_HILAIRE_MELATONIN },
+      melatonin: { id: 'sthilaire07-melatonin', source: 'St Hilaire, Gronfier, Zeitzer & Klerman 2007 J Pineal Res 43:294', parameters: ST_HILAIRE_MELATONIN, suppression_process_l: MELATONIN_PROCESS_L, suppression_definition: 'acute: 100·(1 − AUC / AUC of the same night without light suppression)' },
       sleepiness: { id: 'postnova18-kss', source: 'Postnova, Lockley & Robinson 2018 J Biol Rhythms 33:203 (quasi-steady arousal state)', parameters: POSTNOVA_2018 },
       free_sleep: { id: 'hcl23', source: 'Skeldon et al. 2023/24 PLoS Comput Biol (Homeostatic–Circadian–Light model, authors\' code)', presets: HCL_PRESETS },
       light_input: {

@@ -1,7 +1,7 @@
 /**
  * Second pass of the simulation: plasma melatonin (St Hilaire et al. 2007 J Pineal Res; see
  * melatonin-sthilaire.ts) driven by the synthesis switch times found on the pacemaker trajectory
- * and by K99 Process L. Melatonin does not feed back on the pacemaker in this model, so it is
+ * and by its own Process L (MELATONIN_PROCESS_L). Melatonin does not feed back on the pacemaker in this model, so it is
  * integrated after the pacemaker pass, as the models reference (§4, "Implementation") suggests.
  *
  * Method: the time axis is split at light breakpoints, sleep/wake and synthesis switches; in
@@ -12,7 +12,18 @@
  */
 import { segmentIndexAt, type LightSeries } from './light-series.js';
 import { ST_HILAIRE_MELATONIN as MEL, synthesisRate } from './melatonin-sthilaire.js';
-import { PROCESS_L_K99, lightActivation_per_min } from './process-l.js';
+import { PROCESS_L_SH07, lightActivation_per_min, type ProcessLParams } from './process-l.js';
+
+/**
+ * Process L behind the suppression term m·B̂ (open item settled by validation): St Hilaire et al.
+ * 2007 J Theor Biol (SH07), not Kronauer 1999 (K99). The melatonin paper cites K99, but with K99
+ * the model suppresses 11 % at 1 lx and 19 % at 3 lx and saturates only near 500 lx, while the
+ * paper reports half-maximal suppression at 98 lx, saturation near 200 lx and (Zeitzer 2000)
+ * minimal suppression below 80 lx. SH07's low-light threshold I/(I + 100) reproduces saturation
+ * at ≈ 200 lx and negligible suppression in dim light; its half-maximum is 48 lx in our protocol
+ * (docs/validation/circadian.md). Both sets were published by the same group in the same year.
+ */
+export const MELATONIN_PROCESS_L: ProcessLParams = PROCESS_L_SH07;
 import type { SleepEpisode } from './sleep-input.js';
 
 /** 1 min, in h. */
@@ -25,8 +36,8 @@ export interface MelatoninState {
   /** The same without light suppression (pmol/L). */
   readonly h1Dim: number;
   readonly h2Dim: number;
-  /** n of K99 Process L (the one the suppression gain m = 7 was fitted with). */
-  readonly nK99: number;
+  /** n of the Process L behind the suppression term (MELATONIN_PROCESS_L). */
+  readonly nSuppression: number;
   /** Current synthesis branch: on since `since_h`, or decaying from `atSwitch` since `since_h`. */
   readonly on: boolean;
   readonly since_h: number;
@@ -88,7 +99,7 @@ export function melatoninPass(inp: MelatoninPassInput): MelatoninPassResult {
   for (const s of inp.switches) if (inRange(s.t_h)) cuts.push(s.t_h);
   cuts.sort((a, b) => a - b);
 
-  let { h1, h2, h1Dim, h2Dim, nK99: n, on, since_h: since, atSwitch } = inp.initial;
+  let { h1, h2, h1Dim, h2Dim, nSuppression: n, on, since_h: since, atSwitch } = inp.initial;
   const switches = [...inp.switches].sort((a, b) => a.t_h - b.t_h);
   let sw = 0;
   while (sw < switches.length && (switches[sw] as SynthesisSwitch).t_h <= t0) sw++;
@@ -100,7 +111,7 @@ export function melatoninPass(inp: MelatoninPassInput): MelatoninPassResult {
   const onsets: { t: number; auc: number; dim: number }[] = [];
   let auc = 0;
   let aucDim = 0;
-  const P = PROCESS_L_K99;
+  const P = MELATONIN_PROCESS_L;
   const beta = P.beta_per_min;
 
   const record = (t: number, ta: number, a2: number, a2d: number, b2: number, b2d: number, tb: number) => {
@@ -204,7 +215,7 @@ export function melatoninPass(inp: MelatoninPassInput): MelatoninPassResult {
     };
   });
   return {
-    final: { h1, h2, h1Dim, h2Dim, nK99: n, on, since_h: since, atSwitch },
+    final: { h1, h2, h1Dim, h2Dim, nSuppression: n, on, since_h: since, atSwitch },
     sample_t_h: sample_t,
     plasma_pmol_L: plasma,
     plasmaDim_pmol_L: plasmaDim,

@@ -6,7 +6,7 @@
  *   dH2/dt =  β_IP·H1 − β_CP·H2               plasma (pmol/L); the saliva compartment is omitted
  *   A(t)  = A·(1 − e^{−λ(t − t_on)}) / (1 − e^{−λ(t_off − t_on)})   t_on ≤ t < t_off
  *   A(t)  = A(t_off)·e^{−α_M·(t − t_off)}                           after t_off
- *   A'(t) = A(t)·max(0, 1 − m·B̂)              light suppression, B̂ from K99 Process L
+ *   A'(t) = A(t)·max(0, 1 − m·B̂)              light suppression, B̂ from Process L (SH07 set, see melatonin-pass.ts)
  *   t_on  = crossing of atan2(xc, x) = −65.3° + 0.97 h;  t_off = crossing of −166.2° + 0.97 h
  *
  * Open items settled here:
@@ -15,9 +15,9 @@
  *    denominator differs from 1 by < 1e-100 for any synthesis window longer than 10 min, so it is
  *    taken as 1 and the rising branch needs no look-ahead to t_off.
  *  • (1 − m·B̂) goes negative in bright light (B̂ ≈ 1.7 at the onset of 9 500 lx): clamped at 0.
- *  • m = 7 was fitted with Kronauer 1999 Process L (the paper's ref. 18), so suppression always
- *    uses K99 B̂, whichever pacemaker sets the synthesis times (other pacemakers carry an extra
- *    K99 n state for it).
+ *  • Which Process L feeds m·B̂ (K99 by citation, SH07 possible): SH07, settled by reproducing
+ *    the paper's published intensity–response (melatonin-pass.ts). It runs as its own n state,
+ *    whichever pacemaker sets the synthesis times.
  *  • At the switch to decay, A continues from its value at t_off (continuity; ≈ A).
  */
 export const ST_HILAIRE_MELATONIN = {

@@ -161,7 +161,7 @@ export function odeSize(model: Pacemaker, sleep: SleepSpec): number {
 
 /**
  * A state from pacemaker variables (x, xc, n …): melatonin empty, synthesis branch from the
- * angle (on inside the synthesis arc), n of K99 equal to the pacemaker's n.
+ * angle (on inside the synthesis arc), n of the suppression Process L at 0 (dark-adapted).
  */
 export function stateFromPacemaker(model: Pacemaker, pacemaker: readonly number[], sleep: SleepSpec, t_h: number, awake: boolean): SimState {
   if (pacemaker.length !== model.stateSize) throw new Error(`${model.id} needs ${model.stateSize} state variables (${model.stateNames.join(', ')}), got ${pacemaker.length}`);
@@ -174,7 +174,7 @@ export function stateFromPacemaker(model: Pacemaker, pacemaker: readonly number[
     t_h,
     y,
     awake,
-    melatonin: { h1: 0, h2: 0, h1Dim: 0, h2Dim: 0, nK99: pacemaker[model.nIndex] as number, on, since_h: -Infinity, atSwitch: on ? MEL.A_pmol_L_min : 0 },
+    melatonin: { h1: 0, h2: 0, h1Dim: 0, h2Dim: 0, nSuppression: 0, on, since_h: -Infinity, atSwitch: on ? MEL.A_pmol_L_min : 0 },
     pendingSwitches: [],
     homeostat_nM: HOMEOSTAT_SEED_NM,
   };
