@@ -97,11 +97,19 @@ export async function bench(): Promise<Record<string, unknown>> {
   const room = prepareRoom(s);
   const evaluateMs = medianMs(() => evaluateEyeLight(room, c, occ), 11, 3);
   const evaluateCpuMs = medianCpuMs(() => evaluateEyeLight(room, c, occ), 11, 3);
+  // Fastest of 30 runs: the least disturbed by other work on a shared machine.
+  let evaluateMinMs = Number.POSITIVE_INFINITY;
+  for (let r = 0; r < 30; r++) {
+    const t0 = performance.now();
+    evaluateEyeLight(room, c, occ);
+    evaluateMinMs = Math.min(evaluateMinMs, performance.now() - t0);
+  }
   const out = evaluateEyeLight(room, c, occ);
   let melSum = 0;
   for (const v of out.total.mel_edi_lx) melSum += v;
   return {
     light_at_eye_14d_evaluate_ms: Number(evaluateMs.toFixed(2)),
+    light_at_eye_14d_evaluate_min_ms: Number(evaluateMinMs.toFixed(2)),
     light_at_eye_14d_evaluate_cpu_ms: Number(evaluateCpuMs.toFixed(2)),
     light_at_eye_14d_prepare_ms: Number(prepareMs.toFixed(2)),
     light_at_eye_14d_goal_ms: 20,

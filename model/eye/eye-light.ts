@@ -160,59 +160,66 @@ export function evaluateEyeLight(room: PreparedRoom, c: OutdoorConditions, occ: 
     // Daylight through each window (blinds evolve even when nobody is in the room).
     const edh = c.diffuseHorizontal_lx[i] as number;
     const ebn = c.directNormal_lx[i] as number;
-    const bnW = c.directNormal_W_m2 !== undefined ? (c.directNormal_W_m2[i] as number) : ebn / FALLBACK_BEAM_EFFICACY_LM_W;
-    const sunZen = (c.sunZenith_deg[i] as number) * DEG;
-    const sunAz = (c.sunAzimuth_deg[i] as number) * DEG;
-    const sinZen = Math.sin(sunZen);
-    const sx = Math.sin(sunAz) * sinZen;
-    const sy = Math.cos(sunAz) * sinZen;
-    const sz = Math.cos(sunZen);
-    const month = (c.month[i] as number) - 1;
-    const rhoGround = c.snowOnGround !== undefined && (c.snowOnGround[i] as number) === 1 ? room.groundSnow : (room.groundMonthly[month] as number);
-    const egh = edh + ebn * Math.max(0, sz);
-    const groundLum = (rhoGround * egh) / Math.PI;
-    const k = Math.floor(i / knots.step);
-    const t = (i - k * knots.step) / knots.step;
     let daylightDesk = 0;
-    for (let wi = 0; wi < room.windows.length; wi++) {
-      const w = room.windows[wi] as (typeof room.windows)[number];
-      const wc = w.coefficients;
-      const win = wc.window;
-      const q = knots.values[wi] as Float64Array[];
-      const obsT = win.obstructionTransmittance[month] as number;
-      const obsF = obsT + (1 - obsT) * win.obstructionLuminanceFraction;
-      const sunAlt = 90 - (c.sunZenith_deg[i] as number);
-      const sunF = sunAlt <= 0 || ebn <= 0 ? 0 : sunAlt < win.obstructionAngle_deg ? obsT : 1;
-      const nw = win.outwardNormal;
-      const cosW = sx * nw.x + sy * nw.y + sz * nw.z;
-      const sunThroughGlass = sunF > 0 && cosW > 0 ? ebn * sunF * relativeAngularTransmittanceFast(cosW, win.panes) : 0;
-      const planeSky = edh * (lerpAt(q[4] as Float64Array, k, t) + lerpAt(q[5] as Float64Array, k, t) * obsF);
-      const planeSun = sunThroughGlass * Math.max(0, cosW);
-      const planeGround = groundLum * wc.planeGround;
-      const sunDesk = sunThroughGlass > 0 && rayPassesAperture(wc.desk, sx, sy, sz, nw) ? sunThroughGlass * Math.max(0, sz) : 0;
-      const resp = w.daylight[worn].at(cct);
-      // Photopic glazing transmittance for this daylight spectrum (no eyewear: the desk is not behind the glasses).
-      const glassLux = w.daylight[0].at(cct)[0] as number;
-      const sunDesk_W_m2 = ebn > 0 ? (sunDesk / ebn) * bnW * glassLux : 0;
-      const state = nextBlindState(w.shading, memories[wi] as BlindMemory, minuteOfDay, sunDesk_W_m2, arrival);
-      (blindState[wi] as Uint8Array)[i] = state;
-      let eye: number;
-      let desk: number;
-      if (state === BLIND_OPEN) {
-        const reflected = w.reflectedPerFlux * ((planeSky + planeSun) * room.rhoLower + planeGround * room.rhoUpper);
-        const sunEye = sunThroughGlass > 0 && g !== undefined && rayPassesAperture(wc.eye, sx, sy, sz, nw) ? sunThroughGlass * Math.max(0, sx * g.x + sy * g.y + sz * g.z) : 0;
-        eye = edh * (lerpAt(q[0] as Float64Array, k, t) + lerpAt(q[1] as Float64Array, k, t) * obsF) + groundLum * wc.eye.ground + reflected;
-        // Direct sun carries its own spectrum when the outdoor side gives a sun CCT.
-        if (inRoom && sunEye > 0) addResponse2(daylight, total, i, sunEye, c.sunCct_K !== undefined ? w.daylight[worn].at(c.sunCct_K[i] as number) : resp);
-        desk = edh * (lerpAt(q[2] as Float64Array, k, t) + lerpAt(q[3] as Float64Array, k, t) * obsF) + groundLum * wc.desk.ground + sunDesk + reflected;
-      } else {
-        const transmitted = (w.shading.transmittance[state] as number) * (planeSky + planeSun + planeGround);
-        const reflected = w.reflectedPerFlux * transmitted * 0.5 * (room.rhoLower + room.rhoUpper);
-        eye = (transmitted / Math.PI) * wc.eye.windowView + reflected;
-        desk = (transmitted / Math.PI) * wc.desk.windowView + reflected;
+    if (edh <= 0 && ebn <= 0) {
+      // Dark outside: only the blinds' memory moves on.
+      for (let wi = 0; wi < room.windows.length; wi++) {
+        (blindState[wi] as Uint8Array)[i] = nextBlindState((room.windows[wi] as (typeof room.windows)[number]).shading, memories[wi] as BlindMemory, minuteOfDay, 0, arrival);
       }
-      daylightDesk += desk * glassLux;
-      if (inRoom && eye > 0) addResponse2(daylight, total, i, eye, resp);
+    } else {
+      const bnW = c.directNormal_W_m2 !== undefined ? (c.directNormal_W_m2[i] as number) : ebn / FALLBACK_BEAM_EFFICACY_LM_W;
+      const sunZen = (c.sunZenith_deg[i] as number) * DEG;
+      const sunAz = (c.sunAzimuth_deg[i] as number) * DEG;
+      const sinZen = Math.sin(sunZen);
+      const sx = Math.sin(sunAz) * sinZen;
+      const sy = Math.cos(sunAz) * sinZen;
+      const sz = Math.cos(sunZen);
+      const month = (c.month[i] as number) - 1;
+      const rhoGround = c.snowOnGround !== undefined && (c.snowOnGround[i] as number) === 1 ? room.groundSnow : (room.groundMonthly[month] as number);
+      const egh = edh + ebn * Math.max(0, sz);
+      const groundLum = (rhoGround * egh) / Math.PI;
+      const k = Math.floor(i / knots.step);
+      const t = (i - k * knots.step) / knots.step;
+      for (let wi = 0; wi < room.windows.length; wi++) {
+        const w = room.windows[wi] as (typeof room.windows)[number];
+        const wc = w.coefficients;
+        const win = wc.window;
+        const q = knots.values[wi] as Float64Array[];
+        const obsT = win.obstructionTransmittance[month] as number;
+        const obsF = obsT + (1 - obsT) * win.obstructionLuminanceFraction;
+        const sunAlt = 90 - (c.sunZenith_deg[i] as number);
+        const sunF = sunAlt <= 0 || ebn <= 0 ? 0 : sunAlt < win.obstructionAngle_deg ? obsT : 1;
+        const nw = win.outwardNormal;
+        const cosW = sx * nw.x + sy * nw.y + sz * nw.z;
+        const sunThroughGlass = sunF > 0 && cosW > 0 ? ebn * sunF * relativeAngularTransmittanceFast(cosW, win.panes) : 0;
+        const planeSky = edh * (lerpAt(q[4] as Float64Array, k, t) + lerpAt(q[5] as Float64Array, k, t) * obsF);
+        const planeSun = sunThroughGlass * Math.max(0, cosW);
+        const planeGround = groundLum * wc.planeGround;
+        const sunDesk = sunThroughGlass > 0 && rayPassesAperture(wc.desk, sx, sy, sz, nw) ? sunThroughGlass * Math.max(0, sz) : 0;
+        const resp = w.daylight[worn].at(cct);
+        // Photopic glazing transmittance for this daylight spectrum (no eyewear: the desk is not behind the glasses).
+        const glassLux = w.daylight[0].at(cct)[0] as number;
+        const sunDesk_W_m2 = ebn > 0 ? (sunDesk / ebn) * bnW * glassLux : 0;
+        const state = nextBlindState(w.shading, memories[wi] as BlindMemory, minuteOfDay, sunDesk_W_m2, arrival);
+        (blindState[wi] as Uint8Array)[i] = state;
+        let eye: number;
+        let desk: number;
+        if (state === BLIND_OPEN) {
+          const reflected = w.reflectedPerFlux * ((planeSky + planeSun) * room.rhoLower + planeGround * room.rhoUpper);
+          const sunEye = sunThroughGlass > 0 && g !== undefined && rayPassesAperture(wc.eye, sx, sy, sz, nw) ? sunThroughGlass * Math.max(0, sx * g.x + sy * g.y + sz * g.z) : 0;
+          eye = edh * (lerpAt(q[0] as Float64Array, k, t) + lerpAt(q[1] as Float64Array, k, t) * obsF) + groundLum * wc.eye.ground + reflected;
+          // Direct sun carries its own spectrum when the outdoor side gives a sun CCT.
+          if (inRoom && sunEye > 0) addResponse2(daylight, total, i, sunEye, c.sunCct_K !== undefined ? w.daylight[worn].at(c.sunCct_K[i] as number) : resp);
+          desk = edh * (lerpAt(q[2] as Float64Array, k, t) + lerpAt(q[3] as Float64Array, k, t) * obsF) + groundLum * wc.desk.ground + sunDesk + reflected;
+        } else {
+          const transmitted = (w.shading.transmittance[state] as number) * (planeSky + planeSun + planeGround);
+          const reflected = w.reflectedPerFlux * transmitted * 0.5 * (room.rhoLower + room.rhoUpper);
+          eye = (transmitted / Math.PI) * wc.eye.windowView + reflected;
+          desk = (transmitted / Math.PI) * wc.desk.windowView + reflected;
+        }
+        daylightDesk += desk * glassLux;
+        if (inRoom && eye > 0) addResponse2(daylight, total, i, eye, resp);
+      }
     }
     if (!inRoom) continue;
 
