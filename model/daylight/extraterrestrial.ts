@@ -11,10 +11,17 @@ export function extraterrestrialNormal_W_m2(dayOfYear: number, solarConstant_W_m
   return solarConstant_W_m2 * (1.00011 + 0.034221 * Math.cos(g) + 0.00128 * Math.sin(g) + 0.000719 * Math.cos(2 * g) + 0.000077 * Math.sin(2 * g));
 }
 
-/** Day of year (1–366) of a UT instant. */
+/** Day of year (1–366) of a UT instant (memoised for the last day asked; per-minute callers repeat it). */
+let lastDay = Number.NaN;
+let lastDayOfYear = 1;
 export function dayOfYearUtc(epochMs: number): number {
-  const d = new Date(epochMs);
-  return Math.floor((epochMs - Date.UTC(d.getUTCFullYear(), 0, 1)) / 86_400_000) + 1;
+  const day = Math.floor(epochMs / 86_400_000);
+  if (day !== lastDay) {
+    const d = new Date(epochMs);
+    lastDayOfYear = Math.floor((epochMs - Date.UTC(d.getUTCFullYear(), 0, 1)) / 86_400_000) + 1;
+    lastDay = day;
+  }
+  return lastDayOfYear;
 }
 
 /** Relative air mass, Kasten (1966): 1/(cos θz + 0.15 (93.885 − θz)^−1.253), θz in degrees. */

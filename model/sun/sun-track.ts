@@ -8,11 +8,11 @@
  * Error bound against the full SPA (tested, see sun-track.test.ts): < 1e-6° in zenith and
  * azimuth for 3 h nodes — three orders of magnitude below the SPA's own ±0.0003°.
  */
-import { wrap360_deg } from './angles.js';
+import { DEG, wrap360_deg } from './angles.js';
 import { julianDayFromEpochMs, JD_J2000 } from './julian.js';
 import { resolveObserver, type Observer } from './observer.js';
 import { geocentricSun } from './spa-geocentric.js';
-import { observerTerms, topocentricSun } from './spa-topocentric.js';
+import { observerTerms, refraction_deg } from './spa-topocentric.js';
 import { checkSpaTime, resolveDeltaT_s, type SpaOptions } from './spa.js';
 
 export interface SunTrackOptions extends SpaOptions {
@@ -59,15 +59,9 @@ function buildNodes(fromMs: number, toMs: number, spacing_min: number, deltaT_s:
   return { firstMs, spacingMs, n, alpha, delta, radius, nutationSidereal };
 }
 
-/** 4-point Lagrange cubic through equally spaced values at −1, 0, 1, 2, evaluated at u ∈ [0, 1). */
-function cubic(v: Float64Array, k: number, u: number): number {
-  const a = v[k - 1] as number;
-  const b = v[k] as number;
-  const c = v[k + 1] as number;
-  const d = v[k + 2] as number;
-  return (
-    (-u * (u - 1) * (u - 2) * a) / 6 + ((u + 1) * (u - 1) * (u - 2) * b) / 2 - ((u + 1) * u * (u - 2) * c) / 2 + ((u + 1) * u * (u - 1) * d) / 6
-  );
+/** 4-point Lagrange cubic through equally spaced nodes k−1, k, k+1, k+2 with weights w0…w3. */
+function cubic(v: Float64Array, k: number, w0: number, w1: number, w2: number, w3: number): number {
+  return w0 * (v[k - 1] as number) + w1 * (v[k] as number) + w2 * (v[k + 1] as number) + w3 * (v[k + 2] as number);
 }
 
 /** Mean sidereal time at Greenwich ν0 (deg), SPA Eq. 28 (cheap, exact). */
@@ -94,25 +88,50 @@ export function sunPositionsEvery(startEpochMs: number, step_min: number, count:
   const zenith_deg = new Float64Array(count);
   const azimuth_deg = new Float64Array(count);
   const elevation_deg = new Float64Array(count);
+  // Per instant: the topocentric step of SPA Eqs. 32–46 written with the angle-sum identities
+  // (same mathematics as spa-topocentric.ts, fewer transcendental calls, no allocation).
+  const lon = o.longitude_deg;
+  const xiScale = (8.794 / 3600) * DEG; // ξ (rad) = 8.794″/R; sin ξ = ξ to 1e-15 for ξ ≈ 4e-5 rad
   for (let i = 0; i < count; i++) {
     const t = startEpochMs + i * step_min * MS_PER_MIN;
     const x = (t - nodes.firstMs) / nodes.spacingMs;
     const k = Math.floor(x);
     const u = x - k;
     const jd = julianDayFromEpochMs(t);
-    const top = topocentricSun(
-      {
-        nu_deg: meanSiderealTime_deg(jd) + cubic(nodes.nutationSidereal, k, u),
-        alpha_deg: cubic(nodes.alpha, k, u),
-        delta_deg: cubic(nodes.delta, k, u),
-        R_au: cubic(nodes.radius, k, u),
-      },
-      o,
-      terms,
-    );
-    zenith_deg[i] = top.zenith_deg;
-    azimuth_deg[i] = top.azimuth_deg;
-    elevation_deg[i] = top.elevation_deg;
+    // Lagrange weights at u ∈ [0, 1) for nodes at −1, 0, 1, 2.
+    const w0 = (-u * (u - 1) * (u - 2)) / 6;
+    const w1 = ((u + 1) * (u - 1) * (u - 2)) / 2;
+    const w2 = (-(u + 1) * u * (u - 2)) / 2;
+    const w3 = ((u + 1) * u * (u - 1)) / 6;
+    const nu = meanSiderealTime_deg(jd) + cubic(nodes.nutationSidereal, k, w0, w1, w2, w3);
+    const alpha = cubic(nodes.alpha, k, w0, w1, w2, w3);
+    const delta = cubic(nodes.delta, k, w0, w1, w2, w3) * DEG;
+    const sinXi = xiScale / cubic(nodes.radius, k, w0, w1, w2, w3);
+    const h = (nu + lon - alpha) * DEG; // Eq. 32
+    const cosH = Math.cos(h);
+    const sinH = Math.sin(h);
+    const cosD = Math.cos(delta);
+    const sinD = Math.sin(delta);
+    // Eq. 38: Δα = atan2(−x sinξ sinH, cosδ − x sinξ cosH)
+    const ay = -terms.x * sinXi * sinH;
+    const ax = cosD - terms.x * sinXi * cosH;
+    const ar = Math.sqrt(ax * ax + ay * ay);
+    const cosDA = ax / ar;
+    const sinDA = ay / ar;
+    // Eq. 39: δ′ = atan2((sinδ − y sinξ) cosΔα, cosδ − x sinξ cosH)
+    const dy = (sinD - terms.y * sinXi) * cosDA;
+    const dr = Math.sqrt(ax * ax + dy * dy);
+    const sinDp = dy / dr;
+    const cosDp = ax / dr;
+    // Eq. 40: H′ = H − Δα
+    const cosHp = cosH * cosDA + sinH * sinDA;
+    const sinHp = sinH * cosDA - cosH * sinDA;
+    const e0 = Math.asin(Math.max(-1, Math.min(1, terms.sinLat * sinDp + terms.cosLat * cosDp * cosHp))) / DEG; // Eq. 41
+    const e = e0 + refraction_deg(e0, terms.refractionScale); // Eqs. 42–43
+    const gamma = Math.atan2(sinHp, cosHp * terms.sinLat - (sinDp / cosDp) * terms.cosLat) / DEG; // Eq. 45
+    zenith_deg[i] = 90 - e;
+    azimuth_deg[i] = wrap360_deg(gamma + 180); // Eq. 46
+    elevation_deg[i] = e;
   }
   return { startEpochMs, step_min, count, zenith_deg, azimuth_deg, elevation_deg };
 }

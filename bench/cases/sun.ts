@@ -1,0 +1,36 @@
+/**
+ * Sun and outdoor daylight for one site over 14 days at 1-minute resolution (20 160 steps):
+ * the cheap per-minute SPA path, the full SPA for comparison, and the whole daylight series
+ * from sky conditions (no weather file).
+ */
+import { daylightFromSkyConditions } from '../../model/daylight/daylight-series.js';
+import { outdoorEyeSeries } from '../../model/daylight/outdoor-eye.js';
+import { solarPosition } from '../../model/sun/spa.js';
+import { sunPositionsEvery } from '../../model/sun/sun-track.js';
+import { medianMs } from '../timing.js';
+
+export async function bench(): Promise<Record<string, unknown>> {
+  const site = { latitude_deg: 52.3, longitude_deg: 4.77 };
+  const start = Date.UTC(2025, 2, 10);
+  const minutes = 14 * 1440;
+  const cheap_ms = medianMs(() => {
+    sunPositionsEvery(start, 1, minutes, site);
+  });
+  const fullSample = 2000;
+  const fullMs = medianMs(() => {
+    for (let i = 0; i < fullSample; i++) solarPosition(start + i * 60_000, site);
+  }, 5, 1);
+  const daylight_ms = medianMs(() => {
+    daylightFromSkyConditions({ startEpochMs: start, step_min: 1, count: minutes, site, utcOffset_h: 1, conditions: ['clear', 'intermediate', 'overcast'] });
+  }, 5, 1);
+  const series = daylightFromSkyConditions({ startEpochMs: start, step_min: 1, count: minutes, site, utcOffset_h: 1, conditions: ['clear', 'overcast'] });
+  const eye_ms = medianMs(() => {
+    outdoorEyeSeries(series, { gazeAzimuth_deg: 'all-directions' });
+  }, 5, 1);
+  return {
+    sun_14d_per_minute_cheap_ms: cheap_ms,
+    sun_14d_per_minute_full_spa_ms_extrapolated: (fullMs / fullSample) * minutes,
+    daylight_sky_conditions_14d_per_minute_ms: daylight_ms,
+    outdoor_eye_14d_per_minute_ms: eye_ms,
+  };
+}
