@@ -11,7 +11,7 @@
  *  - age: used for the lens-transmission correction of CIE S 026 (age 32 = reference observer).
  */
 import { z } from 'zod';
-import { clockTimeSchema, fractionSchema, idSchema, nameSchema } from './primitives.js';
+import { clockTimeSchema, dateTimeSchema, fractionSchema, idSchema, nameSchema } from './primitives.js';
 import { screenSchema } from './places-schema.js';
 
 export const ACTIVITIES = ['sleep', 'nap', 'work', 'commute', 'leisure', 'meal', 'exercise', 'other'] as const;
@@ -79,8 +79,8 @@ export const rosterAssignmentSchema = z
 export const measuredLightUseSchema = z
   .strictObject({
     log: idSchema.describe('Identifier of a measured light log.'),
-    from: z.iso.datetime({ offset: true, local: true }).optional().describe('Start of the replaced period (ISO 8601; no offset means site time).'),
-    to: z.iso.datetime({ offset: true, local: true }).optional().describe('End of the replaced period.'),
+    from: dateTimeSchema.optional().describe('Start of the replaced period (ISO 8601; no offset means site time).'),
+    to: dateTimeSchema.optional().describe('End of the replaced period.'),
   })
   .describe('Replace the modelled light at the eye with a measured log for this persona.');
 

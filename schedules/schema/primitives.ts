@@ -28,3 +28,10 @@ export const isoDateSchema = z
 export const fractionSchema = z.number().min(0).max(1);
 
 export const nameSchema = z.string().min(1).max(200);
+
+export const dateTimeSchema = z
+  .string()
+  .regex(/^\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])T([01]\d|2[0-3]):[0-5]\d(:[0-5]\d(\.\d{1,9})?)?(Z|[+-]([01]\d|2[0-3]):?[0-5]\d)?$/, {
+    message: 'a date-time is written "YYYY-MM-DDTHH:MM", optionally with seconds and an offset such as "+01:00" or "Z"',
+  })
+  .describe('ISO 8601 date-time; without an offset it is local time at the site.');

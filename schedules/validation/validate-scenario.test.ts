@@ -119,3 +119,16 @@ describe('week plan sense checks', () => {
     expect(v.problems.map((x) => [x.severity, x.path])).toEqual([['warning', 'personas[1].templates.weekend[4].end']]);
   });
 });
+
+describe('measured light periods', () => {
+  it('accepts local and offset date-times and refuses a date-time that is not one', () => {
+    const doc = demoCopy() as { lightLogs?: unknown[]; personas: { measuredLight?: unknown[] }[] };
+    doc.lightLogs = [{ id: 'w', file: 'w.csv', quantity: { kind: 'photopic-lux' } }];
+    const p = doc.personas[1];
+    if (p === undefined) throw new Error('demo changed');
+    p.measuredLight = [{ log: 'w', from: '2026-03-24T00:00', to: '2026-03-25T06:30:00Z' }];
+    expect(validateScenarioValue(doc).problems).toEqual([]);
+    p.measuredLight = [{ log: 'w', from: '24.03.2026' }];
+    expect(validateScenarioValue(doc).problems.map((x) => x.path)).toEqual(['personas[1].measuredLight[0].from']);
+  });
+});

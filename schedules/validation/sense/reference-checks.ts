@@ -3,6 +3,7 @@ import type { Persona, Place, Scenario, Segment, SegmentPatch } from '../../sche
 import { REST_DAY } from '../../schema/roster-schema.js';
 import { WEEKDAYS } from '../../schema/primitives.js';
 import { problem, type PathPart, type ScenarioProblem } from '../problem.js';
+import { parseDateTimeAtSite } from '../../timeline/expand-scenario.js';
 
 function duplicates<T extends { id: string }>(items: readonly T[], path: readonly PathPart[], what: string, out: ScenarioProblem[]): void {
   const seen = new Map<string, number>();
@@ -102,6 +103,12 @@ export function referenceChecks(s: Scenario): ScenarioProblem[] {
       out.push(problem('error', [...base, 'roster', 'roster'], `there is no roster "${persona.roster.roster}"`, `Use one of: ${listIds(rosters.keys())}.`));
     }
     persona.measuredLight.forEach((m, k) => {
+      const zone = s.site.timeZone;
+      const from = m.from === undefined ? undefined : parseDateTimeAtSite(m.from, zone);
+      const to = m.to === undefined ? undefined : parseDateTimeAtSite(m.to, zone);
+      if (m.from !== undefined && from === undefined) out.push(problem('error', [...base, 'measuredLight', k, 'from'], `${m.from} is not a real date-time`, 'Write an existing date and time.'));
+      if (m.to !== undefined && to === undefined) out.push(problem('error', [...base, 'measuredLight', k, 'to'], `${m.to} is not a real date-time`, 'Write an existing date and time.'));
+      if (from !== undefined && to !== undefined && to <= from) out.push(problem('error', [...base, 'measuredLight', k, 'to'], 'the period ends before it starts', 'Make "to" later than "from".'));
       if (!logs.has(m.log)) out.push(problem('error', [...base, 'measuredLight', k, 'log'], `there is no light log "${m.log}"`, `Add it to "lightLogs" or use one of: ${listIds(logs)}.`));
     });
   });
