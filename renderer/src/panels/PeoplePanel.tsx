@@ -27,7 +27,7 @@ function AddSegmentForm({ scenario, persona }: { scenario: ScenarioInput; person
     >
       <label>
         Day
-        <select value={day} onChange={(e) => setDay(e.target.value as Weekday)}>
+        <select aria-label="Day" value={day} onChange={(e) => setDay(e.target.value as Weekday)}>
           {WEEKDAY_ORDER.map((d) => (
             <option key={d} value={d}>
               {WEEKDAY_NAMES[d]}
@@ -37,15 +37,15 @@ function AddSegmentForm({ scenario, persona }: { scenario: ScenarioInput; person
       </label>
       <label>
         From
-        <input type="text" inputMode="numeric" pattern="([01][0-9]|2[0-3]):[0-5][0-9]|24:00" placeholder="HH:MM" size={6} value={start} onChange={(e) => setStart(e.target.value)} required />
+        <input type="text" inputMode="numeric" pattern="([01][0-9]|2[0-3]):[0-5][0-9]|24:00" placeholder="HH:MM" size={6} aria-label="From" value={start} onChange={(e) => setStart(e.target.value)} required />
       </label>
       <label>
         To
-        <input type="text" inputMode="numeric" pattern="([01][0-9]|2[0-3]):[0-5][0-9]|24:00" placeholder="HH:MM" size={6} value={end} onChange={(e) => setEnd(e.target.value)} required />
+        <input type="text" inputMode="numeric" pattern="([01][0-9]|2[0-3]):[0-5][0-9]|24:00" placeholder="HH:MM" size={6} aria-label="To" value={end} onChange={(e) => setEnd(e.target.value)} required />
       </label>
       <label>
         Place
-        <select value={place} onChange={(e) => setPlace(e.target.value)}>
+        <select aria-label="Place" value={place} onChange={(e) => setPlace(e.target.value)}>
           {scenario.places.map((p) => (
             <option key={p.id} value={p.id}>
               {p.name ?? p.id}
@@ -55,7 +55,7 @@ function AddSegmentForm({ scenario, persona }: { scenario: ScenarioInput; person
       </label>
       <label>
         Activity
-        <select value={activity} onChange={(e) => setActivity(e.target.value as (typeof ACTIVITIES)[number])}>
+        <select aria-label="Activity" value={activity} onChange={(e) => setActivity(e.target.value as (typeof ACTIVITIES)[number])}>
           {ACTIVITIES.map((a) => (
             <option key={a} value={a}>
               {a}

@@ -33,7 +33,7 @@ export function CompareView({ view, personaId, onExport }: { view: ResultsView; 
                 {row.unit !== '' && <span className="unit"> ({row.unit})</span>}
               </th>
               {row.cells.map((cell) => (
-                <td key={cell.strategyId} className={`verdict-${cell.verdict}`} title={cell.reading}>
+                <td key={cell.strategyId} className={`verdict-${cell.verdict}`} title={cell.reading} data-metric={row.metricId} data-strategy={cell.strategyId} data-value={cell.value ?? ''}>
                   <span className="value">{formatNumber(cell.value, row.decimals)}</span>
                   {cell.difference !== null && (
                     <span className="difference">

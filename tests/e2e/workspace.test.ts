@@ -1,0 +1,163 @@
+// End-to-end checks of the workspace in web mode, in Chromium: open the demo scenario, edit a
+// persona's routine and a strategy, undo, read the results views, export CSV. Screenshots of
+// each main view go to tests/artifacts/.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { readFile } from 'node:fs/promises';
+import Papa from 'papaparse';
+import { chromiumAvailable, screenshot, startSession, type Session } from './browser.js';
+
+const available = chromiumAvailable();
+
+describe.skipIf(!available)('workspace in the browser', () => {
+  let s: Session;
+
+  beforeAll(async () => {
+    s = await startSession();
+  }, 240_000);
+
+  afterAll(async () => {
+    await s?.close();
+  });
+
+  const tuesdaySegments = () => s.page.locator('button.segment[aria-label^="Tuesday "]');
+
+  it('opens the demo scenario from the URL and shows its people', async () => {
+    await s.page.goto(`${s.url}?open=demo`);
+    await s.page.getByRole('heading', { name: 'People' }).waitFor();
+    await expect(s.page.getByRole('tab', { name: /Mara Quellbrook/ }).isVisible()).resolves.toBe(true);
+    await s.page.getByRole('tab', { name: /Tove Arnhelm/ }).click();
+    await tuesdaySegments().first().waitFor();
+    await screenshot(s.page, 'people-routine');
+  });
+
+  it('adds a segment to the routine, marks the document unsaved, and undoes it', async () => {
+    const before = await tuesdaySegments().count();
+    const form = s.page.getByRole('form', { name: 'Add a segment' });
+    await form.getByLabel('Day', { exact: true }).selectOption('tue');
+    await form.getByLabel('From', { exact: true }).fill('12:35');
+    await form.getByLabel('To', { exact: true }).fill('12:55');
+    await form.getByLabel('Place', { exact: true }).selectOption('park');
+    await form.getByLabel('Activity', { exact: true }).selectOption('exercise');
+    await form.getByRole('button', { name: 'Add segment' }).click();
+    await expect.poll(() => tuesdaySegments().count()).toBe(before + 1);
+    await expect(s.page.locator('button.segment[aria-label="Tuesday 12:35–12:55, exercise at Fernbrook park path"]').count()).resolves.toBe(1);
+    await expect.poll(() => s.page.title()).toMatch(/^• Demo scenario/);
+    await screenshot(s.page, 'people-segment-added');
+
+    await s.page.getByRole('button', { name: 'Undo' }).click();
+    await expect.poll(() => tuesdaySegments().count()).toBe(before);
+    await s.page.getByRole('button', { name: 'Redo' }).click();
+    await expect.poll(() => tuesdaySegments().count()).toBe(before + 1);
+    await s.page.keyboard.press('Control+z');
+    await expect.poll(() => tuesdaySegments().count()).toBe(before);
+    await expect.poll(() => s.page.title()).toMatch(/^Demo scenario/);
+  });
+
+  it('moves and resizes a segment from the keyboard', async () => {
+    const first = s.page.locator('button.segment[aria-label^="Monday 06:45–07:30"]');
+    await first.focus();
+    await s.page.keyboard.press('ArrowRight');
+    await s.page.locator('button.segment[aria-label^="Monday 07:00–07:45"]').waitFor();
+    await s.page.locator('button.segment[aria-label^="Monday 07:00–07:45"]').focus();
+    await s.page.keyboard.press('Shift+ArrowRight');
+    await s.page.locator('button.segment[aria-label^="Monday 07:00–08:00"]').waitFor();
+    await s.page.keyboard.press('Control+z');
+    await s.page.keyboard.press('Control+z');
+    await s.page.locator('button.segment[aria-label^="Monday 06:45–07:30"]').waitFor();
+  });
+
+  it('changes a strategy and lists the change in plain words, then undoes it', async () => {
+    await s.page.getByRole('button', { name: 'Strategies', exact: true }).click();
+    const card = s.page.getByRole('article', { name: 'Tunable white: brighter day, warmer afternoon' });
+    await card.waitFor();
+    const lux = card.getByLabel('Illuminance at the eye');
+    await lux.fill('900');
+    await expect.poll(() => card.locator('.change-list').innerText()).toContain('900 lx at the eye');
+    await screenshot(s.page, 'strategies');
+    await s.page.getByRole('button', { name: 'Undo' }).click();
+    await expect.poll(() => card.locator('.change-list').innerText()).toContain('450 lx at the eye');
+  });
+
+  it('shows the site and places editors', async () => {
+    await s.page.getByRole('button', { name: 'Site', exact: true }).click();
+    await expect(s.page.getByLabel('Latitude').inputValue()).resolves.toBe('52.4');
+    await screenshot(s.page, 'site');
+    await s.page.getByRole('button', { name: 'Places', exact: true }).click();
+    await s.page.getByRole('article', { name: 'Fernbrook office, open-plan floor 3' }).waitFor();
+    await screenshot(s.page, 'places');
+  });
+
+  it('keeps the cautions visible in the results views', async () => {
+    await s.page.getByRole('button', { name: 'Compare', exact: true }).click();
+    const cautions = s.page.getByRole('complementary', { name: 'Cautions' });
+    await cautions.waitFor();
+    await expect(cautions.innerText()).resolves.toContain('not diagnosis or treatment');
+  });
+
+  it('brighter morning light moves the body clock earlier when the engine is connected', async (ctx) => {
+    await s.page.goto(`${s.url}?open=demo`);
+    await expect.poll(() => s.page.locator('.run-state').innerText(), { timeout: 120_000 }).not.toMatch(/Simulating|Idle/);
+    if ((await s.page.locator('.run-state').innerText()).includes('not connected')) ctx.skip();
+    const dlmo = () => s.page.locator('td[data-metric="dlmo"][data-strategy="office-tunable-white"]').getAttribute('data-value');
+    await s.page.getByRole('button', { name: 'Compare', exact: true }).click();
+    await s.page.getByRole('combobox', { name: 'Person' }).selectOption('desk-worker');
+    const before = Number(await dlmo());
+    await s.page.getByRole('button', { name: 'Strategies', exact: true }).click();
+    await s.page.getByRole('article', { name: 'Tunable white: brighter day, warmer afternoon' }).getByLabel('Illuminance at the eye').fill('1500');
+    await expect.poll(() => s.page.locator('.run-state').innerText(), { timeout: 120_000 }).toBe('Results up to date');
+    await s.page.getByRole('button', { name: 'Compare', exact: true }).click();
+    await s.page.getByRole('combobox', { name: 'Person' }).selectOption('desk-worker');
+    expect(Number(await dlmo())).toBeLessThan(before);
+  });
+
+  it('reports no script or Content-Security-Policy errors', () => {
+    expect(s.consoleErrors).toEqual([]);
+  });
+});
+
+describe.skipIf(!available)('results views (synthetic layout data)', () => {
+  let s: Session;
+
+  beforeAll(async () => {
+    s = await startSession();
+    await s.page.goto(`${s.url}?open=demo&layout-check=synthetic`);
+    await s.page.getByRole('heading', { name: 'People' }).waitFor();
+  }, 240_000);
+
+  afterAll(async () => {
+    await s?.close();
+  });
+
+  it.each([
+    ['Light at the eye', 'results-light-at-eye'],
+    ['Body clock', 'results-body-clock'],
+    ['Melatonin', 'results-melatonin'],
+    ['Sleepiness', 'results-sleepiness'],
+    ['Sleep', 'results-sleep'],
+    ['Compare', 'results-compare'],
+  ])('draws %s with the cautions and the synthetic-data label', async (label, file) => {
+    await s.page.getByRole('button', { name: label, exact: true }).click();
+    await s.page.getByRole('heading', { name: label, level: 2 }).waitFor();
+    await expect(s.page.getByRole('note').innerText()).resolves.toContain('not a simulation result');
+    await expect(s.page.getByRole('complementary', { name: 'Cautions' }).isVisible()).resolves.toBe(true);
+    if (label !== 'Sleep' && label !== 'Compare') await s.page.locator('.recharts-surface').first().waitFor();
+    await screenshot(s.page, file);
+  });
+
+  it('exports the comparison as CSV with differences versus baseline', async () => {
+    await s.page.getByRole('button', { name: 'Compare', exact: true }).click();
+    const [download] = await Promise.all([s.page.waitForEvent('download'), s.page.getByRole('button', { name: 'Export comparison as CSV' }).click()]);
+    expect(download.suggestedFilename()).toBe('comparison.csv');
+    const file = await download.path();
+    const parsed = Papa.parse<string[]>((await readFile(file, 'utf8')).trim());
+    expect(parsed.errors).toEqual([]);
+    expect(parsed.data[0]).toEqual(['persona', 'metric', 'unit', 'strategy', 'value', 'difference_vs_baseline', 'reading']);
+    const dlmo = parsed.data.find((r) => r[1] === 'DLMO (last day)' && r[3] === 'Brighter morning');
+    expect(dlmo?.[5]).toBe('-1.05');
+    expect(dlmo?.[6]).toContain('earlier than baseline');
+  });
+
+  it('reports no script or Content-Security-Policy errors', () => {
+    expect(s.consoleErrors).toEqual([]);
+  });
+});
