@@ -38,13 +38,13 @@ function officeScene(shading?: RoomScene['windows'][number]['shading']): RoomSce
 }
 
 describe('a clear day in an office', () => {
-  it('interpolating the sky every 15 min stays within 2 % of evaluating it every minute', () => {
+  it('interpolating the sky every 30 min (default) stays within 1 % of evaluating it every minute', () => {
     const c = clearDay();
     const exact = evaluateEyeLight(prepareRoom({ ...officeScene(), skyStep_min: 1 }), c, inRoom(1440, 0)).bySource.daylight.photopic_lx;
     const fast = evaluateEyeLight(prepareRoom(officeScene()), c, inRoom(1440, 0)).bySource.daylight.photopic_lx;
     let worst = 0;
     for (let i = 0; i < 1440; i++) if ((exact[i] as number) > 50) worst = Math.max(worst, Math.abs((fast[i] as number) / (exact[i] as number) - 1));
-    expect(worst).toBeLessThan(0.02);
+    expect(worst).toBeLessThan(0.01);
   });
 
   it('the sun rule lowers the blind when the sun reaches the desk, and the lowered blind removes the sun from the eye', () => {

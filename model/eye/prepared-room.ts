@@ -54,7 +54,7 @@ export function prepareRoom(scene: RoomScene): PreparedRoom {
   const gazeElevation = requireFinite('gaze.elevation_deg', scene.gaze.elevation_deg ?? 0);
   if (Math.abs(gazeElevation) > 90) throw new SceneInputError('gaze.elevation_deg', `must be within ±90° (got ${gazeElevation})`);
   const gaze = directionFromAltAz_deg(gazeElevation, scene.gaze.azimuth_deg);
-  const skyStep = scene.skyStep_min ?? 15;
+  const skyStep = scene.skyStep_min ?? 30;
   if (!Number.isInteger(skyStep) || skyStep < 1 || skyStep > 60) throw new SceneInputError('skyStep_min', `must be an integer 1–60 (got ${skyStep})`);
 
   // Split-flux room constants (EnergyPlus Engineering Reference, "Daylight Factor Calculation").
