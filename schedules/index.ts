@@ -17,7 +17,7 @@ export { migrateScenario, MIGRATIONS, type MigrationResult } from './migration/m
 export { expandScenario, expandPersona, parseDateTimeAtSite } from './timeline/expand-scenario.js';
 export { applyStrategyToPlaces, describeChange, describeStrategy } from './timeline/apply-strategy.js';
 export { rosterDay, type RosterDay } from './timeline/roster-plan.js';
-export { sliceAtMinute, dayAtMinute, utcAtMinute, wallClockAtMinute, forEachMinute } from './timeline/timeline-sampling.js';
+export { sliceAtMinute, sliceIndexPerMinute, dayAtMinute, utcAtMinute, wallClockAtMinute, forEachMinute } from './timeline/timeline-sampling.js';
 export {
   BASELINE_ID,
   type ExpandedScenario,

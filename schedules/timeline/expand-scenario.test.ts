@@ -4,7 +4,7 @@ import { scenarioSchema } from '../schema/scenario-schema.js';
 import type { Scenario } from '../schema/scenario-types.js';
 import { expandScenario, expandPersona } from './expand-scenario.js';
 import type { ExposureTimeline } from './exposure-types.js';
-import { forEachMinute, sliceAtMinute, utcAtMinute, wallClockAtMinute } from './timeline-sampling.js';
+import { forEachMinute, sliceAtMinute, sliceIndexPerMinute, utcAtMinute, wallClockAtMinute } from './timeline-sampling.js';
 
 const demo: Scenario = scenarioSchema.parse(DEMO_SCENARIO);
 
@@ -35,6 +35,9 @@ describe('expansion over a daylight-saving change (Europe/Berlin, 29 March 2026:
     });
     expect(visited).toEqual(Array.from({ length: t.total_min }, (_, k) => k));
     expect(utcSeen.size).toBe(t.total_min);
+    const index = sliceIndexPerMinute(t);
+    expect(index.length).toBe(t.total_min);
+    expect(t.slices[index[5000] ?? -1]).toBe(sliceAtMinute(t, 5000));
   });
   it('makes the transition day 23 h long and keeps wall-clock plans on the wall clock', () => {
     const t = timeline('desk-worker');

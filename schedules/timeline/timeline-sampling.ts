@@ -39,3 +39,10 @@ export function wallClockAtMinute(timeline: ExposureTimeline, minute: number): {
 export function forEachMinute(timeline: ExposureTimeline, visit: (minute: number, slice: ExposureSlice) => void): void {
   for (const slice of timeline.slices) for (let m = slice.start_min; m < slice.end_min; m++) visit(m, slice);
 }
+
+/** For each real minute of the run, the index of its slice in `timeline.slices` (for vectorised pipelines). */
+export function sliceIndexPerMinute(timeline: ExposureTimeline): Int32Array {
+  const out = new Int32Array(timeline.total_min);
+  timeline.slices.forEach((s, i) => out.fill(i, s.start_min, s.end_min));
+  return out;
+}
