@@ -144,3 +144,11 @@ describe('comparison table', () => {
     expect(dlmo).toEqual(['Desk worker, "A"', 'DLMO (last day)', 'h', 'Brighter morning', '20.45', '-1.05', 'DLMO (last day) 1.05 h earlier than baseline with Brighter morning.']);
   });
 });
+
+describe('clock axis', () => {
+  it('rounds the domain out to whole half hours and ticks on them', async () => {
+    const { clockAxis } = await import('./clock.js');
+    expect(clockAxis([20.45, 21.5, null])).toEqual({ domain: [20, 21.5], ticks: [20, 20.5, 21, 21.5] });
+    expect(clockAxis([21, 21])).toEqual({ domain: [20.5, 21.5], ticks: [20.5, 21, 21.5] });
+  });
+});

@@ -41,3 +41,20 @@ export function unwrapClockHours(values: readonly (number | null)[], reference: 
     return h;
   });
 }
+
+/** Axis domain and ticks for clock-hour values: whole steps of `step_h` around the data. */
+export function clockAxis(values: readonly (number | null | undefined)[], step_h = 0.5): { domain: [number, number]; ticks: number[] } {
+  const known = values.filter((v): v is number => typeof v === 'number' && Number.isFinite(v));
+  if (known.length === 0) return { domain: [0, 24], ticks: [0, 6, 12, 18, 24] };
+  let lo = Math.floor(Math.min(...known) / step_h) * step_h;
+  let hi = Math.ceil(Math.max(...known) / step_h) * step_h;
+  if (hi - lo < 2 * step_h) {
+    lo -= step_h;
+    hi += step_h;
+  }
+  const span = hi - lo;
+  const stride = span > 12 ? 3 : span > 6 ? 2 : span > 3 ? 1 : step_h;
+  const ticks: number[] = [];
+  for (let t = Math.ceil(lo / stride) * stride; t <= hi + 1e-9; t += stride) ticks.push(Number(t.toFixed(6)));
+  return { domain: [lo, hi], ticks };
+}

@@ -5,7 +5,7 @@ import type { ResultsView } from '../results/view-model.js';
 import { findRun } from '../results/view-model.js';
 import { phaseByDayRows, phaseKey, phaseShiftVsBaseline_h, type PhaseMarker } from '../charts/phase-data.js';
 import { seriesColour, seriesDash } from '../charts/palette.js';
-import { formatClock, formatDayLabel } from '../charts/clock.js';
+import { clockAxis, formatClock, formatDayLabel } from '../charts/clock.js';
 
 export function BodyClockView({ view, personaId }: { view: ResultsView; personaId: string }) {
   const [marker, setMarker] = useState<PhaseMarker>('dlmo');
@@ -13,6 +13,7 @@ export function BodyClockView({ view, personaId }: { view: ResultsView; personaI
   const strategies = view.strategies.filter((s) => runs.some((r) => r.strategyId === s.id));
   const rows = phaseByDayRows(runs, strategies, view.days, marker);
   const baseline = findRun(view, personaId, view.baselineId);
+  const axis = clockAxis(rows.flatMap((r) => strategies.map((st) => r[phaseKey(st.id, marker)])));
   return (
     <div className="chart-block">
       <div className="chart-toolbar">
@@ -29,7 +30,7 @@ export function BodyClockView({ view, personaId }: { view: ResultsView; personaI
           <LineChart data={rows} margin={{ top: 16, right: 24, bottom: 8, left: 8 }}>
             <CartesianGrid stroke="#e3e6ea" />
             <XAxis dataKey="day" tickFormatter={(d: number) => formatDayLabel(view.startDate, d)} />
-            <YAxis reversed domain={['auto', 'auto']} tickFormatter={(h: number) => formatClock(h)} label={{ value: 'clock time (earlier ↑)', angle: -90, position: 'insideLeft', style: { textAnchor: 'middle', fill: '#4a5563' } }} />
+            <YAxis reversed domain={axis.domain} ticks={axis.ticks} tickFormatter={(h: number) => formatClock(h)} label={{ value: 'clock time (earlier ↑)', angle: -90, position: 'insideLeft', style: { textAnchor: 'middle', fill: '#4a5563' } }} />
             <Tooltip labelFormatter={(d) => formatDayLabel(view.startDate, Number(d))} formatter={(v, name) => [formatClock(Number(v)), String(name)]} />
             <Legend />
             {strategies.map((s, i) => (

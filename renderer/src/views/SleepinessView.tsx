@@ -62,7 +62,7 @@ export function SleepinessView({ view, personaId, day }: { view: ResultsView; pe
       <p className="small muted">Darker = sleepier (KSS 1 extremely alert … 9 very sleepy). Outlined cells: KSS ≥ 7. Hatched: asleep or not modelled.</p>
       <figure className="chart" aria-label="KSS over one day">
         <ResponsiveContainer width="100%" height={240}>
-          <LineChart data={kssDayRows(run.kssHourly, day)} margin={{ top: 16, right: 24, bottom: 8, left: 8 }}>
+          <LineChart data={kssDayRows(run.kssHourly, day)} margin={{ top: 16, right: 56, bottom: 8, left: 8 }}>
             <CartesianGrid stroke="#e3e6ea" vertical={false} />
             <XAxis dataKey="hour" type="number" domain={[0, 23]} ticks={[0, 3, 6, 9, 12, 15, 18, 21]} tickFormatter={(h: number) => formatClock(h)} />
             <YAxis domain={[1, 9]} ticks={[1, 3, 5, 7, 9]} label={{ value: 'KSS', angle: -90, position: 'insideLeft', fill: '#4a5563' }} />
