@@ -56,3 +56,48 @@ describe('calendar arithmetic', () => {
     expect(daysBetween('2026-01-01', '2027-01-01')).toBe(365);
   });
 });
+
+describe('wall time round trip (property)', () => {
+  // Zones with 1 h, 30 min (Lord Howe) and midnight (Santiago) transitions, per the IANA tz database.
+  const zones = ['Europe/Berlin', 'America/New_York', 'Australia/Lord_Howe', 'America/Santiago', 'Asia/Tehran', 'Pacific/Auckland'];
+  it('maps the wall clock of any instant back to that instant, or to the first pass of a repeated time', async () => {
+    const fc = (await import('fast-check')).default;
+    fc.assert(
+      fc.property(fc.constantFrom(...zones), fc.integer({ min: Date.UTC(2015, 0, 1) / 60_000, max: Date.UTC(2035, 0, 1) / 60_000 }), (zone, minute) => {
+        const t = minute * 60_000;
+        const w = utcToWallTime(zone, t);
+        const back = wallTimeToUtc_ms(zone, w.date, w.minuteOfDay);
+        expect(back).toBeLessThanOrEqual(t);
+        expect(t - back).toBeLessThanOrEqual(60 * 60_000);
+        expect(utcToWallTime(zone, back)).toEqual(w);
+        // Cross-check against luxon's own reading of the instant.
+        const dt = DateTime.fromMillis(t, { zone });
+        expect(w.date).toBe(dt.toISODate());
+        expect(w.minuteOfDay).toBe(dt.hour * 60 + dt.minute);
+      }),
+      { numRuns: 2000 },
+    );
+  });
+});
+
+describe('wall time round trip through every transition of 2026', () => {
+  it('holds for every quarter hour of the year in zones with half-hour and midnight transitions', () => {
+    for (const zone of ['Australia/Lord_Howe', 'America/Santiago', 'Europe/Berlin']) {
+      let shortDays = 0;
+      let longDays = 0;
+      for (let t = Date.UTC(2026, 0, 1); t < Date.UTC(2027, 0, 1); t += 15 * 60_000) {
+        const w = utcToWallTime(zone, t);
+        const back = wallTimeToUtc_ms(zone, w.date, w.minuteOfDay);
+        if (back > t || t - back > 3_600_000) throw new Error(`${zone} ${new Date(t).toISOString()} → ${new Date(back).toISOString()}`);
+      }
+      for (let d = 0; d < 365; d++) {
+        const date = addDays('2026-01-01', d);
+        const len = (wallTimeToUtc_ms(zone, addDays(date, 1), 0) - wallTimeToUtc_ms(zone, date, 0)) / 60_000;
+        if (len < 1440) shortDays++;
+        if (len > 1440) longDays++;
+      }
+      // One short and one long day a year in each zone (IANA tz rules for these zones).
+      expect([zone, shortDays, longDays]).toEqual([zone, 1, 1]);
+    }
+  });
+});
