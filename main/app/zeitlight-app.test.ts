@@ -29,7 +29,7 @@ describe('desktop app controller', () => {
   it('creates every window with the required security settings, the preload and the app page', async () => {
     const { fake, app, root, paths } = await setup();
     const file = path.join(root, 'office.zeitlight');
-    await writeFile(file, '{"site":{"name":"Office"}}');
+    await writeFile(file, '{"format":"zeitlight-scenario","version":2,"site":{"name":"Office"}}');
     await app.start({ files: [file], demo: false });
     app.openWindow({ kind: 'empty' }, null);
     app.openWindow({ kind: 'demo' }, null);
@@ -47,11 +47,11 @@ describe('desktop app controller', () => {
     await app.start({ files: [], demo: false });
     const a = path.join(root, 'a.zeitlight');
     const b = path.join(root, 'b.zeitlight');
-    await writeFile(a, '{"n":1}');
-    await writeFile(b, '{"n":2}');
+    await writeFile(a, '{"format":"zeitlight-scenario","version":2,"n":1}');
+    await writeFile(b, '{"format":"zeitlight-scenario","version":2,"n":2}');
     const first = last(fake);
     fake.openDialogAnswers.push(a, b, a);
-    expect(await fake.invoke(first, 'document:open')).toMatchObject({ status: 'opened-here', document: { path: a, text: '{"n":1}' } });
+    expect(await fake.invoke(first, 'document:open')).toMatchObject({ status: 'opened-here', document: { path: a, text: '{"format":"zeitlight-scenario","version":2,"n":1}' } });
     expect(await fake.invoke(first, 'document:open')).toEqual({ status: 'opened-elsewhere' });
     expect(fake.windows).toHaveLength(2);
     expect(await fake.invoke(last(fake), 'document:initial')).toMatchObject({ kind: 'file', document: { path: b } });
@@ -65,37 +65,37 @@ describe('desktop app controller', () => {
     const { fake, app, root } = await setup();
     await app.start({ files: [], demo: false });
     const w = last(fake);
-    await fake.invoke(w, 'document:edited', { dirty: true, text: '{"edited":1}' });
+    await fake.invoke(w, 'document:edited', { dirty: true, text: '{"format":"zeitlight-scenario","version":2,"edited":1}' });
     expect(w.title).toBe('• Untitled — Zeitlight');
     expect(w.edited).toBe(true);
     fake.saveDialogAnswers.push(path.join(root, 'clinic'));
-    const outcome = await fake.invoke(w, 'document:save', { text: '{"edited":1}', mode: 'save' });
+    const outcome = await fake.invoke(w, 'document:save', { text: '{"format":"zeitlight-scenario","version":2,"edited":1}', mode: 'save' });
     const saved = path.join(root, 'clinic.zeitlight');
     expect(outcome).toEqual({ status: 'written', path: saved, displayName: 'clinic.zeitlight' });
-    expect(await readFile(saved, 'utf8')).toBe('{"edited":1}');
+    expect(await readFile(saved, 'utf8')).toBe('{"format":"zeitlight-scenario","version":2,"edited":1}');
     expect(w.title).toBe('clinic.zeitlight — Zeitlight');
     expect(labels(fake.menus[fake.menus.length - 1]!)).toContain(saved);
     // A plain save of a named document writes in place without asking.
-    await fake.invoke(w, 'document:save', { text: '{"edited":2}', mode: 'save' });
+    await fake.invoke(w, 'document:save', { text: '{"format":"zeitlight-scenario","version":2,"edited":2}', mode: 'save' });
     expect(fake.saveDialogs).toHaveLength(1);
-    expect(await readFile(saved, 'utf8')).toBe('{"edited":2}');
+    expect(await readFile(saved, 'utf8')).toBe('{"format":"zeitlight-scenario","version":2,"edited":2}');
   });
 
   it('refuses to save text that is not a scenario and leaves the file as it was', async () => {
     const { fake, app, root } = await setup();
     const file = path.join(root, 'keep.zeitlight');
-    await writeFile(file, '{"ok":true}');
+    await writeFile(file, '{"format":"zeitlight-scenario","version":2,"ok":true}');
     await app.start({ files: [file], demo: false });
     const outcome = await fake.invoke(last(fake), 'document:save', { text: '{broken', mode: 'save' });
     expect(outcome).toMatchObject({ status: 'failed' });
-    expect(await readFile(file, 'utf8')).toBe('{"ok":true}');
+    expect(await readFile(file, 'utf8')).toBe('{"format":"zeitlight-scenario","version":2,"ok":true}');
   });
 
   it('asks before closing a window with unsaved changes and honours each answer', async () => {
     const { fake, app, root } = await setup();
     await app.start({ files: [], demo: false });
     const w = last(fake);
-    await fake.invoke(w, 'document:edited', { dirty: true, text: '{"x":1}' });
+    await fake.invoke(w, 'document:edited', { dirty: true, text: '{"format":"zeitlight-scenario","version":2,"x":1}' });
 
     fake.messageBoxAnswers.push(2); // Cancel
     w.close();
@@ -108,7 +108,7 @@ describe('desktop app controller', () => {
     w.close();
     await new Promise((r) => setTimeout(r, 20));
     expect(w.destroyed).toBe(true);
-    expect(await readFile(path.join(root, 'kept.zeitlight'), 'utf8')).toBe('{"x":1}');
+    expect(await readFile(path.join(root, 'kept.zeitlight'), 'utf8')).toBe('{"format":"zeitlight-scenario","version":2,"x":1}');
     expect(app.openWindowCount()).toBe(0);
   });
 
@@ -123,7 +123,7 @@ describe('desktop app controller', () => {
   it('offers to restore unsaved work after a crash and reopens it as an unsaved window', async () => {
     const first = await setup();
     await first.app.start({ files: [], demo: false });
-    await first.fake.invoke(last(first.fake), 'document:edited', { dirty: true, text: '{"draft":"morning light"}' });
+    await first.fake.invoke(last(first.fake), 'document:edited', { dirty: true, text: '{"format":"zeitlight-scenario","version":2,"draft":"morning light"}' });
     await first.timers.tick(); // autosave tick, then the process dies without closing windows
 
     const second = await setup(first.data);
@@ -132,7 +132,7 @@ describe('desktop app controller', () => {
     expect(second.fake.messageBoxes[0]?.buttons).toEqual(['Restore', 'Discard']);
     expect(second.fake.windows).toHaveLength(1);
     const restored = last(second.fake);
-    expect(await second.fake.invoke(restored, 'document:initial')).toMatchObject({ kind: 'recovered', document: { text: '{"draft":"morning light"}' } });
+    expect(await second.fake.invoke(restored, 'document:initial')).toMatchObject({ kind: 'recovered', document: { text: '{"format":"zeitlight-scenario","version":2,"draft":"morning light"}' } });
     expect(restored.title).toBe('• Untitled — Zeitlight');
     // The restored draft is protected again at once, under the new window's name only.
     expect(await readdir(path.join(first.data, 'recovery'))).toEqual(['w1.recovery.json']);
@@ -141,7 +141,7 @@ describe('desktop app controller', () => {
   it('discards leftover drafts when the user declines to restore', async () => {
     const first = await setup();
     await first.app.start({ files: [], demo: false });
-    await first.fake.invoke(last(first.fake), 'document:edited', { dirty: true, text: '{"draft":1}' });
+    await first.fake.invoke(last(first.fake), 'document:edited', { dirty: true, text: '{"format":"zeitlight-scenario","version":2,"draft":1}' });
     await first.timers.tick();
 
     const second = await setup(first.data);

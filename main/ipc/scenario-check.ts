@@ -1,7 +1,11 @@
-// The one place where main decides whether a text is an acceptable scenario document.
-// Today: well-formed JSON whose top level is an object, within a size limit. When schedules/
-// exports its scenario schema, call it here (and only here) so open, save and autosave all
-// apply the same rules.
+// The one place where main decides whether a text is an acceptable scenario document, so open
+// and save apply the same rules: within the size limit, well-formed JSON, a top-level object
+// that says it is a Zeitlight scenario in a format version this build can read (the scenario
+// format's own migration check). Content problems (missing fields, sense checks) do not block
+// opening or saving: unfinished work must be savable, and the workspace lists those problems
+// with their paths and fixes.
+import { migrateScenario } from '../../schedules/migration/migrate.js';
+import { formatProblem } from '../../schedules/validation/problem.js';
 
 /** Largest scenario text main accepts, in characters (a year of minute data stays well below). */
 export const MAX_SCENARIO_CHARS = 20_000_000;
@@ -22,5 +26,7 @@ export function checkScenarioText(text: string, source: string): ScenarioCheck {
   if (typeof value !== 'object' || value === null || Array.isArray(value)) {
     return { ok: false, problems: [`${source}: the top level must be a JSON object`] };
   }
+  const identity = migrateScenario(value).problems.filter((p) => p.severity === 'error');
+  if (identity.length > 0) return { ok: false, problems: identity.map((p) => `${source}: ${formatProblem(p)}`) };
   return { ok: true, value: value as Record<string, unknown> };
 }

@@ -32,9 +32,20 @@ export interface Session {
   close(): Promise<void>;
 }
 
+let built: Promise<WebServerModule> | null = null;
+
+/** Builds the renderer once per test file, then reuses the build. */
+function builtRenderer(): Promise<WebServerModule> {
+  built ??= (async () => {
+    const server = (await import(path.resolve(import.meta.dirname, '..', '..', 'scripts', 'web-server.mjs'))) as WebServerModule;
+    await server.buildRenderer();
+    return server;
+  })();
+  return built;
+}
+
 export async function startSession(): Promise<Session> {
-  const server = (await import(path.resolve(import.meta.dirname, '..', '..', 'scripts', 'web-server.mjs'))) as WebServerModule;
-  await server.buildRenderer();
+  const server = await builtRenderer();
   const web = await server.serveRenderer({ port: 0 });
   const profile = await mkdtemp(path.join(tmpdir(), 'zeitlight-chromium-'));
   await mkdir(ARTIFACTS, { recursive: true });
