@@ -15,7 +15,7 @@
  * would still land inside that range; the choice is documented, not measured.
  */
 import type { Pacemaker, PersonParams } from './pacemaker.js';
-import { PROCESS_L_F99, PROCESS_L_SF14, lightActivation_per_min, photicDrive, processLRate_per_h, type ProcessLParams } from './process-l.js';
+import { PROCESS_L_F99, PROCESS_L_SF14, cachedLightActivation, photicDrive, processLRate_per_h, type ProcessLParams } from './process-l.js';
 
 const W = Math.PI / 12;
 
@@ -34,6 +34,7 @@ export function createFjkCubic(person: PersonParams = {}, variant: 'f99' | 'sf14
   const tau = person.tau_h ?? P.tau_h;
   const w2 = (24 / (P.periodCorrection * tau)) ** 2;
   const { mu, k, b } = P;
+  const activation = cachedLightActivation(processL);
   return {
     id: variant === 'f99' ? 'fjk99-cubic' : 'fjk99-cubic-sf14',
     label:
@@ -55,7 +56,7 @@ export function createFjkCubic(person: PersonParams = {}, variant: 'f99' | 'sf14
       const x = y[0] as number;
       const xc = y[1] as number;
       const n = y[2] as number;
-      const a = lightActivation_per_min(processL, I);
+      const a = activation(I);
       const bh = photicDrive(processL, a, n);
       const B = bh * (1 - b * x) * (1 - b * xc);
       dydt[0] = W * (xc + B);

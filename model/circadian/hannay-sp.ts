@@ -16,7 +16,7 @@
  * product's clockwise angle is −ψ.
  */
 import type { Pacemaker, PersonParams } from './pacemaker.js';
-import { PROCESS_L_H19, lightActivation_per_min, photicDrive, processLRate_per_h } from './process-l.js';
+import { PROCESS_L_H19, cachedLightActivation, photicDrive, processLRate_per_h } from './process-l.js';
 
 export const HANNAY_SP_PARAMETERS = {
   tau0_h: 23.84,
@@ -53,6 +53,7 @@ export function createHannaySp(person: PersonParams = {}): Pacemaker {
   const { K, gamma, beta1, A1, A2, betaL1, betaL2, sigma } = P;
   const kc = (K / 2) * Math.cos(beta1);
   const ks = (K / 2) * Math.sin(beta1);
+  const activation = cachedLightActivation(processL);
   return {
     id: 'hfb19-sp',
     label: 'Hannay–Booth–Forger 2019 macroscopic single-population model',
@@ -70,7 +71,7 @@ export function createHannaySp(person: PersonParams = {}): Pacemaker {
       const R = y[0] as number;
       const psi = y[1] as number;
       const n = y[2] as number;
-      const a = lightActivation_per_min(processL, I);
+      const a = activation(I);
       const bh = photicDrive(processL, a, n);
       const R2 = R * R;
       const R4 = R2 * R2;

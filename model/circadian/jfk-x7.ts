@@ -14,7 +14,7 @@
  * + 0.97 h) falls ≈ 0.6 h later; it is not used for CBTmin here.
  */
 import type { Pacemaker, PersonParams } from './pacemaker.js';
-import { PROCESS_L_K99, lightActivation_per_min, photicDrive, processLRate_per_h, type ProcessLParams } from './process-l.js';
+import { PROCESS_L_K99, cachedLightActivation, photicDrive, processLRate_per_h, type ProcessLParams } from './process-l.js';
 
 const W = Math.PI / 12;
 
@@ -33,6 +33,7 @@ export function createJfkX7(person: PersonParams = {}, processL: ProcessLParams 
   const tau = person.tau_h ?? P.tau_h;
   const w2 = (24 / (P.periodCorrection * tau)) ** 2;
   const { mu, q, k, b } = P;
+  const activation = cachedLightActivation(processL);
   return {
     id: 'jfk99-x7',
     label: 'Jewett–Forger–Kronauer 1999 higher-order (x⁷) oscillator with Kronauer 1999 Process L',
@@ -50,7 +51,7 @@ export function createJfkX7(person: PersonParams = {}, processL: ProcessLParams 
       const x = y[0] as number;
       const xc = y[1] as number;
       const n = y[2] as number;
-      const a = lightActivation_per_min(processL, I);
+      const a = activation(I);
       const bh = photicDrive(processL, a, n);
       const B = bh * (1 - b * x) * (1 - b * xc);
       const x2 = x * x;

@@ -6,8 +6,9 @@
  *
  * Method: the time axis is split at light breakpoints, sleep/wake and synthesis switches; in
  * each piece the light is constant (or smooth), so n of Process L relaxes exponentially and the
- * linear pineal/plasma pair is advanced by its exact exponential propagator over steps of at most
- * MELATONIN_STEP_H, with the forcing A'(t) taken at the step midpoint (second order in the step).
+ * linear pineal/plasma pair is advanced by its exact exponential propagator, with the forcing A'(t)
+ * taken at the step midpoint (second order in the step): 1-minute steps for the first 30 min of
+ * each piece, where the transients are, 6-minute steps after.
  * An unsuppressed "dim-light" pair (m = 0) runs alongside for acute % suppression.
  */
 import { segmentIndexAt, type LightSeries } from './light-series.js';
@@ -26,8 +27,12 @@ import { PROCESS_L_SH07, lightActivation_per_min, type ProcessLParams } from './
 export const MELATONIN_PROCESS_L: ProcessLParams = PROCESS_L_SH07;
 import type { SleepEpisode } from './sleep-input.js';
 
-/** 1 min, in h. */
+/** Step for the first MELATONIN_FINE_SPAN_H of every piece (after a light change, sleep/wake or synthesis switch): 1 min. */
 export const MELATONIN_STEP_H = 1 / 60;
+/** Span of fine steps at the start of a piece (h); the fastest transients (λ = 35 h⁻¹, bright-light n) are over by then. */
+export const MELATONIN_FINE_SPAN_H = 0.5;
+/** Step in the rest of a piece (h). */
+export const MELATONIN_COARSE_STEP_H = 0.1;
 
 export interface MelatoninState {
   /** Pineal and plasma melatonin with light (pmol/L). */
@@ -149,57 +154,63 @@ export function melatoninPass(inp: MelatoninPassInput): MelatoninPassResult {
     const smooth = light.smooth?.[idx];
     const dayOffset = mid - tt;
     const levelAt = (t: number) => gate * (smooth === undefined ? (light.level[idx] as number) : Math.max(0, smooth(t - dayOffset)));
-    const nSteps = Math.max(1, Math.ceil((b - a) / MELATONIN_STEP_H - 1e-9));
-    const h = (b - a) / nSteps;
-    const ea = Math.exp(-A_RATE * h);
-    const ec = Math.exp(-C_RATE * h);
-    const k = (A_RATE * (ea - ec)) / (C_RATE - A_RATE);
-    let alpha = lightActivation_per_min(P, levelAt(mid));
-    let r = 60 * (alpha + beta);
-    let nInf = r > 0 ? (60 * alpha) / r : 0;
-    let eHalf = Math.exp(-r * 0.5 * h);
-    let eFull = eHalf * eHalf;
-    // synthesis factor g at the step midpoints, advanced multiplicatively
     const rate = on ? 60 * MEL.lambda_per_min : 60 * MEL.alphaM_per_min;
-    let g = Number.isFinite(since) ? Math.exp(-rate * (a + 0.5 * h - since)) : 0;
-    const gStep = Math.exp(-rate * h);
-    for (let s = 0; s < nSteps; s++) {
-      const ta = a + s * h;
-      if (smooth !== undefined) {
-        alpha = lightActivation_per_min(P, levelAt(ta + 0.5 * h));
-        r = 60 * (alpha + beta);
-        nInf = r > 0 ? (60 * alpha) / r : 0;
-        eHalf = Math.exp(-r * 0.5 * h);
-        eFull = eHalf * eHalf;
+    let alpha = lightActivation_per_min(P, levelAt(mid));
+    // fine steps where the transients are (the start of every piece), coarser steps after
+    const fineEnd = Math.min(b, a + MELATONIN_FINE_SPAN_H);
+    const phases: [number, number, number][] = [[a, fineEnd, MELATONIN_STEP_H]];
+    if (b > fineEnd + 1e-12) phases.push([fineEnd, b, MELATONIN_COARSE_STEP_H]);
+    for (const [pa, pb, maxStep] of phases) {
+      const nSteps = Math.max(1, Math.ceil((pb - pa) / maxStep - 1e-9));
+      const h = (pb - pa) / nSteps;
+      const ea = Math.exp(-A_RATE * h);
+      const ec = Math.exp(-C_RATE * h);
+      const k = (A_RATE * (ea - ec)) / (C_RATE - A_RATE);
+      let r = 60 * (alpha + beta);
+      let nInf = r > 0 ? (60 * alpha) / r : 0;
+      let eHalf = Math.exp(-r * 0.5 * h);
+      let eFull = eHalf * eHalf;
+      // synthesis factor g at the step midpoints, advanced multiplicatively
+      let g = Number.isFinite(since) ? Math.exp(-rate * (pa + 0.5 * h - since)) : 0;
+      const gStep = Math.exp(-rate * h);
+      for (let s = 0; s < nSteps; s++) {
+        const ta = pa + s * h;
+        if (smooth !== undefined) {
+          alpha = lightActivation_per_min(P, levelAt(ta + 0.5 * h));
+          r = 60 * (alpha + beta);
+          nInf = r > 0 ? (60 * alpha) / r : 0;
+          eHalf = Math.exp(-r * 0.5 * h);
+          eFull = eHalf * eHalf;
+        }
+        // Process L: exact relaxation toward n∞ at rate 60(α + β)
+        const nMid = nInf + (n - nInf) * eHalf;
+        const A = on ? MEL.A_pmol_L_min * (1 - g) : atSwitch * g;
+        g *= gStep;
+        const bhat = P.G_min * alpha * (1 - nMid);
+        const F = 60 * A * Math.max(0, 1 - MEL.m * bhat);
+        const Fd = 60 * A;
+        // exact propagator of H1' = F − aH1, H2' = aH1 − cH2 with constant F
+        const u = h1 - F / A_RATE;
+        const v = h2 - F / C_RATE;
+        const nh1 = F / A_RATE + u * ea;
+        const nh2 = F / C_RATE + v * ec + u * k;
+        const ud = h1Dim - Fd / A_RATE;
+        const vd = h2Dim - Fd / C_RATE;
+        const nh1d = Fd / A_RATE + ud * ea;
+        const nh2d = Fd / C_RATE + vd * ec + ud * k;
+        const tb = ta + h;
+        while (nextSample <= tb + 1e-9 && nextSample <= tEnd + 1e-9) {
+          record(nextSample, ta, h2, h2Dim, nh2, nh2d, tb);
+          nextSample += inp.sampleStep_h;
+        }
+        auc += 0.5 * h * (h2 + nh2);
+        aucDim += 0.5 * h * (h2Dim + nh2d);
+        h1 = nh1;
+        h2 = nh2;
+        h1Dim = nh1d;
+        h2Dim = nh2d;
+        n = nInf + (n - nInf) * eFull;
       }
-      // Process L: exact relaxation toward n∞ at rate 60(α + β)
-      const nMid = nInf + (n - nInf) * eHalf;
-      const A = on ? MEL.A_pmol_L_min * (1 - g) : atSwitch * g;
-      g *= gStep;
-      const bhat = P.G_min * alpha * (1 - nMid);
-      const F = 60 * A * Math.max(0, 1 - MEL.m * bhat);
-      const Fd = 60 * A;
-      // exact propagator of H1' = F − aH1, H2' = aH1 − cH2 with constant F
-      const u = h1 - F / A_RATE;
-      const v = h2 - F / C_RATE;
-      const nh1 = F / A_RATE + u * ea;
-      const nh2 = F / C_RATE + v * ec + u * k;
-      const ud = h1Dim - Fd / A_RATE;
-      const vd = h2Dim - Fd / C_RATE;
-      const nh1d = Fd / A_RATE + ud * ea;
-      const nh2d = Fd / C_RATE + vd * ec + ud * k;
-      const tb = ta + h;
-      while (nextSample <= tb + 1e-9 && nextSample <= tEnd + 1e-9) {
-        record(nextSample, ta, h2, h2Dim, nh2, nh2d, tb);
-        nextSample += inp.sampleStep_h;
-      }
-      auc += 0.5 * h * (h2 + nh2);
-      aucDim += 0.5 * h * (h2Dim + nh2d);
-      h1 = nh1;
-      h2 = nh2;
-      h1Dim = nh1d;
-      h2Dim = nh2d;
-      n = nInf + (n - nInf) * eFull;
     }
   }
   const nights: MelatoninNight[] = onsets.map((o, i) => {

@@ -82,3 +82,19 @@ export function processLRate_per_h(P: ProcessLParams, alpha_per_min: number, n: 
 export function photicDrive(P: ProcessLParams, alpha_per_min: number, n: number): number {
   return P.G_min * alpha_per_min * (1 - n);
 }
+
+/**
+ * α(I) with a one-entry cache: inside a constant-light segment every right-hand-side call has
+ * the same I, so the power/Hill function is evaluated once per segment.
+ */
+export function cachedLightActivation(P: ProcessLParams): (I_lx: number) => number {
+  let lastI = Number.NaN;
+  let lastAlpha = 0;
+  return (I_lx: number) => {
+    if (I_lx !== lastI) {
+      lastI = I_lx;
+      lastAlpha = lightActivation_per_min(P, I_lx);
+    }
+    return lastAlpha;
+  };
+}

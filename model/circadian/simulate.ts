@@ -265,7 +265,7 @@ export function simulate(opts: SimulationOptions): SimulationRun {
     addSample(t, (i) => y0[i] as number);
     nextSample += sampleStep;
   }
-  const dpace = new Array<number>(model.stateSize).fill(0);
+  const dydt = new Array<number>(size).fill(0);
 
   while (t < tEnd - 1e-12) {
     const d0 = dayStartOf(t);
@@ -280,16 +280,21 @@ export function simulate(opts: SimulationOptions): SimulationRun {
 
     const rhs = (tq: number, yq: readonly number[]): number[] => {
       const I = gate * (smooth === undefined ? level : Math.max(0, smooth(tq - d0)));
-      model.derivatives(yq, I, dpace);
-      if (hclIndex < 0) return [...dpace];
-      const d = [...dpace];
-      d.push((hcl.mu * wake - (yq[hclIndex] as number)) / hcl.chi_h);
-      return d;
+      // odex and the RK4 integrator copy the derivative out at once, so one array is reused
+      model.derivatives(yq, I, dydt);
+      if (hclIndex >= 0) dydt[hclIndex] = (hcl.mu * wake - (yq[hclIndex] as number)) / hcl.chi_h;
+      return dydt;
     };
-    const angleAt = (dense: Dense, tq: number) => model.angle([dense(0, tq), dense(1, tq)]);
-    const crossing = (dense: Dense, ta: number, tb: number, target: number): number | undefined => {
-      const da = wrap(angleAt(dense, ta) - target);
-      const db = wrap(angleAt(dense, tb) - target);
+    const pair = [0, 0];
+    const angleAt = (dense: Dense, tq: number) => {
+      pair[0] = dense(0, tq);
+      pair[1] = dense(1, tq);
+      return model.angle(pair);
+    };
+    /** Crossing of a clockwise target angle inside [ta, tb], given the angles at both ends. */
+    const crossing = (dense: Dense, ta: number, tb: number, angleA: number, angleB: number, target: number): number | undefined => {
+      const da = wrap(angleA - target);
+      const db = wrap(angleB - target);
       if (!(da > 0 && db <= 0 && da - db < Math.PI)) return undefined;
       let lo = ta;
       let hi = tb;
@@ -309,8 +314,12 @@ export function simulate(opts: SimulationOptions): SimulationRun {
     };
 
     let switchAt: number | undefined;
-    const observer = (tOld: number, tNew: number, _yEnd: readonly number[], dense: Dense): number | undefined => {
+    let angleOld = model.angle(y);
+    const observer = (tOld: number, tNew: number, yEnd: readonly number[], dense: Dense): number | undefined => {
       steps++;
+      const angleA = angleOld;
+      const angleB = model.angle(yEnd);
+      angleOld = angleB;
       while (nextSample <= tNew + 1e-9 && nextSample <= tEnd + 1e-9) {
         const ts = nextSample;
         addSample(ts, (i) => dense(i, ts));
@@ -335,15 +344,15 @@ export function simulate(opts: SimulationOptions): SimulationRun {
         }
         lastDxSign = sb;
       } else {
-        const tc = crossing(dense, tOld, tNew, model.marker.angle_rad);
+        const tc = crossing(dense, tOld, tNew, angleA, angleB, model.marker.angle_rad);
         if (tc !== undefined) addMarker(tc);
       }
-      const on = crossing(dense, tOld, tNew, tools.synOn);
+      const on = crossing(dense, tOld, tNew, angleA, angleB, tools.synOn);
       if (on !== undefined) {
         synOn.push(on + MEL.synDelay_h);
         switches.push({ t_h: on + MEL.synDelay_h, on: true });
       }
-      const off = crossing(dense, tOld, tNew, tools.synOff);
+      const off = crossing(dense, tOld, tNew, angleA, angleB, tools.synOff);
       if (off !== undefined) {
         synOff.push(off + MEL.synDelay_h);
         switches.push({ t_h: off + MEL.synDelay_h, on: false });
@@ -403,9 +412,20 @@ export function simulate(opts: SimulationOptions): SimulationRun {
     return postnovaCircadianDrive(X, Y);
   });
   const transitions = sleepEpisodes.flatMap((e) => [e.start_h, e.end_h]).sort((a, b) => a - b);
+  // sleep state at non-decreasing query times (a moving pointer over the sorted episodes)
+  const asleepScanner = () => {
+    let k = 0;
+    return (tq: number): boolean => {
+      while (k < sleepEpisodes.length && (sleepEpisodes[k] as SleepEpisode).end_h <= tq) k++;
+      const e = sleepEpisodes[k];
+      return e !== undefined && tq >= e.start_h;
+    };
+  };
+  const asleepAtHom = asleepScanner();
+  const asleepAtKss = asleepScanner();
   const asleepAt = (tq: number) => sleepEpisodes.some((e) => tq >= e.start_h && tq < e.end_h);
-  const hom = homeostatPass(samples.t_h, C, (tq) => !asleepAt(tq), transitions, initial.homeostat_nM);
-  const kssValues = samples.t_h.map((tq, i) => (asleepAt(tq) ? Number.NaN : kss(hom.H_nM[i] as number, C[i] as number)));
+  const hom = homeostatPass(samples.t_h, C, (tq) => !asleepAtHom(tq), transitions, initial.homeostat_nM);
+  const kssValues = samples.t_h.map((tq, i) => (asleepAtKss(tq) ? Number.NaN : kss(hom.H_nM[i] as number, C[i] as number)));
   // the last sample may lie before tEnd: finish H to tEnd
   const lastT = samples.t_h[samples.t_h.length - 1] ?? t0;
   let finalH = hom.final_nM;

@@ -116,6 +116,9 @@ export function kss(H: number, C: number): number {
   return P.kss0 + P.kssH_per_nM * H + P.kssC * C;
 }
 
+/** Largest Heun step for H (h); τ_H = 59 h, so the local error is ~(0.5/59)³ relative. */
+export const HOMEOSTAT_MAX_STEP_H = 0.5;
+
 /** Seed for H (nM), from a public port of Skeldon et al. 2017 (H = 14.6). */
 export const HOMEOSTAT_SEED_NM = 14.6;
 
@@ -128,7 +131,8 @@ export interface HomeostatTrace {
 
 /**
  * Integrates H over the sample grid with Heun's method, splitting each interval at sleep/wake
- * transitions (C interpolated linearly between samples).
+ * transitions (C interpolated linearly between samples). `awakeAt` is queried at
+ * non-decreasing times.
  */
 export function homeostatPass(t_h: readonly number[], C: readonly number[], awakeAt: (t: number) => boolean, transitions: readonly number[], H0: number): HomeostatTrace {
   const H: number[] = [];
@@ -151,7 +155,7 @@ export function homeostatPass(t_h: readonly number[], C: readonly number[], awak
       const b = cuts[j + 1] as number;
       if (!(b > a)) continue;
       const aw = awakeAt(0.5 * (a + b));
-      const nSub = Math.max(1, Math.ceil((b - a) / 0.25));
+      const nSub = Math.max(1, Math.ceil((b - a) / HOMEOSTAT_MAX_STEP_H));
       const dt = (b - a) / nSub;
       for (let s = 0; s < nSub; s++) {
         const t0 = a + s * dt;

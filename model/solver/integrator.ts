@@ -4,7 +4,7 @@
  * Time unit: whatever the right-hand side uses (hours in model/circadian).
  */
 
-/** dy/dt at (t, y). Must not keep references to y. */
+/** dy/dt at (t, y). Must not keep references to y; may return the same array on every call (integrators copy it before the next call). */
 export type RightHandSide = (t: number, y: readonly number[]) => number[];
 
 /** Continuous solution of component i inside the step just accepted. */

@@ -16,7 +16,7 @@ export function createRk4Integrator(step: number = RK4_DEFAULT_STEP_H): Integrat
       const n = y0.length;
       let t = t0;
       let y = [...y0];
-      let f0 = rhs(t, y);
+      let f0 = [...rhs(t, y)];
       let evals = 1;
       let steps = 0;
       const tmp = new Array<number>(n);
@@ -26,16 +26,17 @@ export function createRk4Integrator(step: number = RK4_DEFAULT_STEP_H): Integrat
         const tn = s === nSteps - 1 ? t1 : t0 + (s + 1) * h;
         const hh = tn - t;
         for (let i = 0; i < n; i++) tmp[i] = (y[i] as number) + 0.5 * hh * (f0[i] as number);
-        const k2 = rhs(t + 0.5 * hh, tmp);
+        const k2 = [...rhs(t + 0.5 * hh, tmp)];
         for (let i = 0; i < n; i++) tmp[i] = (y[i] as number) + 0.5 * hh * (k2[i] as number);
-        const k3 = rhs(t + 0.5 * hh, tmp);
+        const k3 = [...rhs(t + 0.5 * hh, tmp)];
         for (let i = 0; i < n; i++) tmp[i] = (y[i] as number) + hh * (k3[i] as number);
         const k4 = rhs(tn, tmp);
+        // k4 is used before the next call; every other derivative is copied (the rhs may reuse its array)
         const yn = new Array<number>(n);
         for (let i = 0; i < n; i++) {
           yn[i] = (y[i] as number) + (hh / 6) * ((f0[i] as number) + 2 * (k2[i] as number) + 2 * (k3[i] as number) + (k4[i] as number));
         }
-        const f1 = rhs(tn, yn);
+        const f1 = [...rhs(tn, yn)];
         evals += 4;
         steps++;
         if (observe !== undefined) {
