@@ -69,6 +69,10 @@ export function daylightFromEpw(file: EpwFile, window: SampleWindow, options: Ep
     const hit = cache.get(hourEnd);
     if (hit !== undefined) return hit;
     const r = epwRecordIndexAt(file, dayIndex, hourEnd);
+    if (r < 0) {
+      const d = new Date(hourEnd - 1 + tzMs);
+      throw new RangeError(`${file.fileName}: the weather file (${file.period.start} – ${file.period.end}) has no data for ${d.getUTCMonth() + 1}/${d.getUTCDate()}, which the time span needs`);
+    }
     const v = file.values;
     const dew = Number.isFinite(v.dewPoint_C[r] as number) ? (v.dewPoint_C[r] as number) : 10;
     // Clear-sky means over the hour from six sub-samples.

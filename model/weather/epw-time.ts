@@ -30,21 +30,17 @@ export function epwDayIndex(file: EpwFile): EpwDayIndex {
 /**
  * Record whose hour contains the UT instant `epochMs` (hour-ending: an instant exactly on h:00
  * belongs to hour label h). The calendar year is ignored (typical-year files); 29 February
- * falls back to 28 February when the file has no leap day.
+ * falls back to 28 February when the file has no leap day. Returns −1 when the file does not
+ * cover that calendar day.
  */
 export function epwRecordIndexAt(file: EpwFile, index: EpwDayIndex, epochMs: number): number {
   // Shift by a hair so h:00 exactly lands in the interval that ends at h:00.
   const local = new Date(epochMs + file.location.timeZone_h * MS_PER_H - 1);
-  let month = local.getUTCMonth() + 1;
-  let day = local.getUTCDate();
+  const month = local.getUTCMonth() + 1;
+  const day = local.getUTCDate();
   const label = local.getUTCHours() + 1;
   let first = index.firstRecordOf(month, day);
   if (first < 0 && month === 2 && day === 29) first = index.firstRecordOf(2, 28);
-  if (first < 0) {
-    // A file that covers part of a year: clamp to its nearest end.
-    month = file.month[0] ?? 1;
-    day = file.day[0] ?? 1;
-    first = index.firstRecordOf(month, day);
-  }
+  if (first < 0) return -1;
   return Math.min(file.count - 1, first + label - 1);
 }

@@ -64,3 +64,17 @@ describe('zeitlight sun', () => {
     expect(doc.day_kind).toBe('polar-day');
   });
 });
+
+describe('zeitlight sun through the built launcher', () => {
+  it('prints exactly one JSON document on stdout and nothing on stderr', async () => {
+    const { runZeitlight } = await import('../helpers/run-cli.js');
+    const r = runZeitlight(['sun', '--lat', '52.3', '--lon', '4.77', '--time', '2025-06-21T13:40:00+02:00', '--json']);
+    expect(r.status).toBe(0);
+    expect(r.stderr).toBe('');
+    const doc = JSON.parse(r.stdout) as { elevation_deg: number; azimuth_deg: number };
+    // Near local solar noon at midsummer, 52.3°N: elevation ≈ 90 − 52.3 + 23.44 = 61.1° (declination, common practice).
+    expect(doc.elevation_deg).toBeGreaterThan(60.5);
+    expect(doc.elevation_deg).toBeLessThan(61.5);
+    expect(Math.abs(doc.azimuth_deg - 180)).toBeLessThan(5);
+  });
+});

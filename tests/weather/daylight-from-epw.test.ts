@@ -49,3 +49,15 @@ describe('per-minute daylight from an EPW file', () => {
     }
   });
 });
+
+describe('per-minute daylight from a partial-year EPW file', () => {
+  it('refuses a time span outside the file, naming the file and the day', async () => {
+    const lines = amsterdamEpwText().split(/\r?\n/).filter((l) => l.trim() !== '');
+    // Keep January only (31 × 24 rows) and say so in DATA PERIODS.
+    const head = lines.slice(0, 8);
+    head[7] = (head[7] ?? '').replace('12/31', ' 1/31');
+    const januaryOnly = parseEpw([...head, ...lines.slice(8, 8 + 31 * 24)].join('\n'), 'january.epw');
+    expect(januaryOnly.count).toBe(744);
+    expect(() => daylightFromEpw(januaryOnly, { startEpochMs: Date.UTC(2025, 2, 3), step_min: 1, count: 60 })).toThrow(/january\.epw: .*no data for 3\/3/);
+  });
+});
