@@ -1,6 +1,6 @@
 // Electron entry point: wires the real Electron modules into the app controller. This is the
 // only main-process file that loads 'electron' at run time.
-import { app, BrowserWindow, dialog, ipcMain, Menu, session } from 'electron';
+import { app, BrowserWindow, dialog, ipcMain, Menu, protocol, session } from 'electron';
 import * as path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { ZeitlightApp } from './app/zeitlight-app.js';
@@ -9,6 +9,7 @@ import { nodeFileSystem } from './files/file-system.js';
 import { realTimers } from './files/autosaver.js';
 import { scenarioFilesInArgs } from './app/command-line.js';
 import { securityViolations } from './security/web-preferences.js';
+import { APP_SCHEME, APP_SCHEME_PRIVILEGES, handleAppScheme } from './security/app-protocol.js';
 
 // dist/electron/main.mjs sits two folders below the app root.
 const appRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
@@ -17,7 +18,10 @@ if (!app.requestSingleInstanceLock()) {
   app.quit();
 } else {
   app.enableSandbox();
+  protocol.registerSchemesAsPrivileged([{ scheme: APP_SCHEME, privileges: APP_SCHEME_PRIVILEGES }]);
   app.whenReady().then(async () => {
+    const paths = appPaths(appRoot, app.getPath('userData'));
+    handleAppScheme(protocol, nodeFileSystem, paths.rendererDist);
     const controller = new ZeitlightApp(
       {
         app,
@@ -35,7 +39,7 @@ if (!app.requestSingleInstanceLock()) {
         platform: process.platform,
       },
       nodeFileSystem,
-      appPaths(appRoot, app.getPath('userData')),
+      paths,
       realTimers,
       (message) => console.warn(`[zeitlight] ${message}`),
     );

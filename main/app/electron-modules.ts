@@ -6,7 +6,7 @@ import type { GuardedSession } from '../security/navigation-guard.js';
 /** The members of a BrowserWindow the controller relies on. */
 export interface AppWindow {
   readonly webContents: Pick<WebContents, 'on' | 'setWindowOpenHandler' | 'send' | 'printToPDF' | 'id'>;
-  loadFile(filePath: string, options?: { query?: Record<string, string> }): Promise<void>;
+  loadURL(url: string): Promise<void>;
   on(event: 'close', listener: (event: { preventDefault(): void }) => void): unknown;
   on(event: 'closed', listener: () => void): unknown;
   setTitle(title: string): void;

@@ -41,8 +41,8 @@ export class FakeWindow extends Emitter {
   constructor(readonly options: BrowserWindowConstructorOptions) {
     super();
   }
-  async loadFile(filePath: string): Promise<void> {
-    this.loaded = filePath;
+  async loadURL(url: string): Promise<void> {
+    this.loaded = url;
   }
   setTitle(title: string): void {
     this.title = title;

@@ -2,8 +2,8 @@
 import * as path from 'node:path';
 
 export interface AppPaths {
-  /** renderer/dist/index.html, loaded with loadFile. */
-  readonly rendererPage: string;
+  /** The renderer build, served through the app scheme (security/app-protocol.ts). */
+  readonly rendererDist: string;
   /** The bundled preload script (CommonJS, required by sandboxed renderers). */
   readonly preloadScript: string;
   readonly recentFilesStore: string;
@@ -13,7 +13,7 @@ export interface AppPaths {
 
 export function appPaths(appRoot: string, userData: string): AppPaths {
   return {
-    rendererPage: path.join(appRoot, 'renderer', 'dist', 'index.html'),
+    rendererDist: path.join(appRoot, 'renderer', 'dist'),
     preloadScript: path.join(appRoot, 'dist', 'electron', 'preload.cjs'),
     recentFilesStore: path.join(userData, 'recent-scenarios.json'),
     recoveryFolder: path.join(userData, 'recovery'),
@@ -21,8 +21,3 @@ export function appPaths(appRoot: string, userData: string): AppPaths {
   };
 }
 
-/** The file:// URL of the app page as the renderer reports it in IPC sender frames. */
-export function pageUrlOf(filePath: string): string {
-  const normalized = filePath.split(path.sep).join('/');
-  return `file://${normalized.startsWith('/') ? '' : '/'}${encodeURI(normalized)}`;
-}

@@ -4,7 +4,8 @@ import { tmpdir } from 'node:os';
 import * as path from 'node:path';
 import type { MenuItemConstructorOptions } from 'electron';
 import { ZeitlightApp } from './zeitlight-app.js';
-import { appPaths, pageUrlOf } from './paths.js';
+import { appPaths } from './paths.js';
+import { APP_PAGE_URL } from '../security/app-protocol.js';
 import { fakeElectron, manualTimers, type FakeElectron, type FakeWindow } from './fake-electron.js';
 import { nodeFileSystem } from '../files/file-system.js';
 import { securityViolations } from '../security/web-preferences.js';
@@ -13,7 +14,7 @@ async function setup(userData?: string) {
   const root = await mkdtemp(path.join(tmpdir(), 'zeitlight-app-'));
   const data = userData ?? path.join(root, 'user-data');
   const paths = appPaths('/opt/zeitlight', data);
-  const fake = fakeElectron(pageUrlOf(paths.rendererPage));
+  const fake = fakeElectron(APP_PAGE_URL);
   const timers = manualTimers();
   const app = new ZeitlightApp(fake.modules, nodeFileSystem, paths, timers);
   return { root, data, paths, fake, timers, app };
@@ -37,7 +38,7 @@ describe('desktop app controller', () => {
     for (const w of fake.windows) {
       expect(securityViolations(w.options.webPreferences)).toEqual([]);
       expect(w.options.webPreferences?.preload).toBe(paths.preloadScript);
-      expect(w.loaded).toBe(paths.rendererPage);
+      expect(w.loaded).toBe(APP_PAGE_URL);
       expect(w.webContents.windowOpenHandler?.({ url: 'https://example.com' })).toEqual({ action: 'deny' });
     }
   });

@@ -6,7 +6,6 @@ import type { IpcMainInvokeEvent } from 'electron';
 import type { InitialDocument, MenuCommand, OpenOutcome, WriteOutcome, SaveRequest } from '../../types/desktop-api.js';
 import type { AppWindow, ElectronModules } from './electron-modules.js';
 import type { AppPaths } from './paths.js';
-import { pageUrlOf } from './paths.js';
 import type { FileSystem } from '../files/file-system.js';
 import { RecentFiles } from '../files/recent-files.js';
 import { RecoveryStore } from '../files/recovery-store.js';
@@ -14,6 +13,7 @@ import { Autosaver, type Timers } from '../files/autosaver.js';
 import { SCENARIO_EXTENSION, displayNameFor, readScenarioFile, withScenarioExtension, writeScenarioFile, writeTextFile } from '../files/scenario-file.js';
 import { secureWebPreferences } from '../security/web-preferences.js';
 import { guardSession, guardWebContents } from '../security/navigation-guard.js';
+import { APP_PAGE_URL } from '../security/app-protocol.js';
 import { registerIpcHandlers, type ChannelHandlers } from '../ipc/register-handlers.js';
 import { buildMenuTemplate } from '../menu/menu-template.js';
 
@@ -62,7 +62,7 @@ export class ZeitlightApp {
   /** Call once the Electron app is ready. */
   async start(options: StartOptions): Promise<void> {
     guardSession(this.electron.defaultSession, (what) => this.log(`blocked ${what}`));
-    registerIpcHandlers(this.electron.ipcMain, this.handlers(), () => pageUrlOf(this.paths.rendererPage));
+    registerIpcHandlers(this.electron.ipcMain, this.handlers(), () => APP_PAGE_URL);
     await this.recent.load();
     this.refreshMenu();
     this.electron.app.on('window-all-closed', () => {
@@ -104,7 +104,7 @@ export class ZeitlightApp {
       backgroundColor: '#f7f7f5',
       webPreferences: secureWebPreferences(this.paths.preloadScript),
     });
-    guardWebContents(window.webContents, pageUrlOf(this.paths.rendererPage), (what) => this.log(`blocked ${what}`));
+    guardWebContents(window.webContents, APP_PAGE_URL, (what) => this.log(`blocked ${what}`));
     const state: DocumentWindow = {
       key,
       window,
@@ -129,7 +129,7 @@ export class ZeitlightApp {
       void state.autosaver.stop();
     });
     this.updateTitle(state);
-    void window.loadFile(this.paths.rendererPage);
+    void window.loadURL(APP_PAGE_URL);
     return window;
   }
 

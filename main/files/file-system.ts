@@ -4,6 +4,7 @@ import * as fsp from 'node:fs/promises';
 
 export interface FileSystem {
   readFile(path: string, encoding: 'utf8'): Promise<string>;
+  readBinary(path: string): Promise<Uint8Array>;
   writeFile(path: string, data: string | Uint8Array): Promise<void>;
   rename(from: string, to: string): Promise<void>;
   unlink(path: string): Promise<void>;
@@ -14,6 +15,7 @@ export interface FileSystem {
 
 export const nodeFileSystem: FileSystem = {
   readFile: (p, e) => fsp.readFile(p, e),
+  readBinary: async (p) => new Uint8Array(await fsp.readFile(p)),
   writeFile: (p, d) => fsp.writeFile(p, d),
   rename: (a, b) => fsp.rename(a, b),
   unlink: (p) => fsp.unlink(p),

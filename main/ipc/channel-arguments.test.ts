@@ -45,7 +45,7 @@ describe('IPC handler registration', () => {
       'export:csv': () => ({ status: 'cancelled' }),
       'export:pdf': () => ({ status: 'cancelled' }),
     } as unknown as ChannelHandlers;
-    registerIpcHandlers({ handle: (c: string, l: (event: IpcMainInvokeEvent, ...args: unknown[]) => unknown) => void registered.set(c, l) } as never, handlers, () => 'file:///app/renderer/dist/index.html');
+    registerIpcHandlers({ handle: (c: string, l: (event: IpcMainInvokeEvent, ...args: unknown[]) => unknown) => void registered.set(c, l) } as never, handlers, () => 'zeitlight://app/index.html');
     const call = (url: string, channel: string, ...args: unknown[]) => registered.get(channel)!({ senderFrame: { url } } as unknown as IpcMainInvokeEvent, ...args);
     return { registered, calls, call };
   }
@@ -56,14 +56,14 @@ describe('IPC handler registration', () => {
 
   it('passes validated arguments to the handler for calls from the app page', async () => {
     const { calls, call } = setup();
-    await call('file:///app/renderer/dist/index.html?x=1', 'document:save', { text: '{}', mode: 'save' });
+    await call('zeitlight://app/index.html?x=1', 'document:save', { text: '{}', mode: 'save' });
     expect(calls).toEqual([[{ text: '{}', mode: 'save' }]]);
   });
 
   it('refuses calls from any other page and calls with bad arguments, before the handler runs', () => {
     const { calls, call } = setup();
     expect(() => call('https://example.org/', 'document:save', { text: '{}', mode: 'save' })).toThrow(/unexpected page/);
-    expect(() => call('file:///app/renderer/dist/index.html', 'document:save', { text: 1 })).toThrow(/document:save/);
+    expect(() => call('zeitlight://app/index.html', 'document:save', { text: 1 })).toThrow(/document:save/);
     expect(calls).toEqual([]);
   });
 });

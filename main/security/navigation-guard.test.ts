@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { guardSession, guardWebContents, isAppPage, type GuardedContents, type GuardedSession } from './navigation-guard.js';
 
-const APP = 'file:///opt/zeitlight/renderer/dist/index.html';
+const APP = 'zeitlight://app/index.html';
 
 function fakeContents() {
   const listeners = new Map<string, (event: { preventDefault(): void }, url?: string) => void>();
@@ -22,6 +22,7 @@ describe('navigation blocking', () => {
   it('recognises the app page regardless of query or hash', () => {
     expect(isAppPage(`${APP}?open=demo#compare`, APP)).toBe(true);
     expect(isAppPage('file:///etc/passwd', APP)).toBe(false);
+    expect(isAppPage('zeitlight://other/index.html', APP)).toBe(false);
     expect(isAppPage('not a url', APP)).toBe(false);
   });
 
@@ -31,9 +32,10 @@ describe('navigation blocking', () => {
     guardWebContents(contents, APP, (w) => blocked.push(w));
     expect(fire('will-navigate', 'https://example.com/')).toBe(true);
     expect(fire('will-navigate', 'file:///home/user/other.html')).toBe(true);
+    expect(fire('will-navigate', 'zeitlight://app/other.html')).toBe(true);
     expect(fire('will-redirect', 'http://127.0.0.1:1/')).toBe(true);
     expect(fire('will-navigate', `${APP}?open=demo`)).toBe(false);
-    expect(blocked).toHaveLength(3);
+    expect(blocked).toHaveLength(4);
   });
 
   it('denies every new window and every webview', () => {
@@ -65,6 +67,8 @@ describe('navigation blocking', () => {
     expect(decide('http://127.0.0.1:8080/')).toBe(true);
     expect(decide('wss://example.com/')).toBe(true);
     expect(decide(`${APP}`)).toBe(false);
-    expect(decide('blob:file:///abc')).toBe(false);
+    expect(decide('blob:zeitlight://app/abc')).toBe(false);
+    expect(decide('zeitlight://app/assets/index.js')).toBe(false);
+    expect(decide('file:///etc/passwd')).toBe(true);
   });
 });

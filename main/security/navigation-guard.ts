@@ -21,9 +21,9 @@ export function isAppPage(target: string, appPageUrl: string): boolean {
   }
 }
 
-/** URL schemes the renderer may load from: its own files and in-memory blobs/data. */
+/** URL schemes the renderer may load from: the app scheme, devtools and in-memory blobs/data. */
 export function isLocalResource(url: string): boolean {
-  return /^(file|devtools|blob|data):/i.test(url);
+  return /^(zeitlight|devtools|blob|data):/i.test(url);
 }
 
 export function guardWebContents(contents: GuardedContents, appPageUrl: string, onBlocked: (what: string) => void = () => {}): void {
