@@ -13,6 +13,13 @@ import { SKY_CONDITION_CLOUD_OKTAS, skyConditionFromClearness, skyConditionIrrad
 import { cloudGlobalFactor } from './decomposition.js';
 import { twilightDiffuseFloor_lx } from './twilight.js';
 
+const DARK = { clearness: 1, brightness: 0, bin: 0 } as const;
+const CLOUD_FACTOR: Readonly<Record<SkyCondition, number>> = {
+  clear: cloudGlobalFactor(SKY_CONDITION_CLOUD_OKTAS.clear),
+  intermediate: cloudGlobalFactor(SKY_CONDITION_CLOUD_OKTAS.intermediate),
+  overcast: cloudGlobalFactor(SKY_CONDITION_CLOUD_OKTAS.overcast),
+};
+
 /** Sky condition codes stored per sample. */
 export const SKY_CONDITION_CODE: Readonly<Record<SkyCondition, number>> = { clear: 0, intermediate: 1, overcast: 2 };
 
@@ -75,7 +82,8 @@ export function finishSample(s: DaylightSeries, i: number, cloudFactor: number, 
   const t = s.startEpochMs + i * s.step_min * 60_000;
   const i0 = extraterrestrialNormal_W_m2(dayOfYearUtc(t));
   const zc = Math.min(zenith, PEREZ_MAX_ZENITH_DEG);
-  const idx = perezSkyIndices(zc, s.directNormal_W_m2[i] as number, s.diffuseHorizontal_W_m2[i] as number, airMassKasten1966(zc), i0);
+  const dhi = s.diffuseHorizontal_W_m2[i] as number;
+  const idx = dhi > 0 ? perezSkyIndices(zc, s.directNormal_W_m2[i] as number, dhi, airMassKasten1966(zc), i0) : DARK;
   s.clearness[i] = idx.clearness;
   s.brightness[i] = idx.brightness;
   const cls = condition ?? skyConditionFromClearness(idx.clearness);
@@ -122,6 +130,10 @@ export function daylightFromSkyConditions(input: SkyConditionDaylightInput): Day
     const day = Math.floor((t + offsetMs) / 86_400_000) - firstDay;
     const cond = input.conditions[day % input.conditions.length] as SkyCondition;
     const zenith = sun.zenith_deg[i] as number;
+    if (zenith >= 90) {
+      finishSample(s, i, CLOUD_FACTOR[cond], cond); // dark apart from the twilight floor
+      continue;
+    }
     const i0 = extraterrestrialNormal_W_m2(dayOfYearUtc(t));
     const irr = skyConditionIrradiance(cond, zenith, i0, { linkeTurbidity: tl, altitude_m: input.site.elevation_m ?? 0 });
     s.directNormal_W_m2[i] = irr.directNormal_W_m2;
@@ -130,7 +142,7 @@ export function daylightFromSkyConditions(input: SkyConditionDaylightInput): Day
     const lx = perezIlluminance({ zenith_deg: zenith, directNormal_W_m2: irr.directNormal_W_m2, diffuseHorizontal_W_m2: irr.diffuseHorizontal_W_m2, dewPoint_C: dew, extraterrestrial_W_m2: i0 });
     s.directNormal_lx[i] = lx.directNormal_lx;
     s.diffuseHorizontal_lx[i] = lx.diffuseHorizontal_lx;
-    finishSample(s, i, cloudGlobalFactor(SKY_CONDITION_CLOUD_OKTAS[cond]), cond);
+    finishSample(s, i, CLOUD_FACTOR[cond], cond);
   }
   return s;
 }

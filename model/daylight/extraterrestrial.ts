@@ -6,9 +6,15 @@
  */
 export const SOLAR_CONSTANT_W_M2 = 1367;
 
+let lastDoy = Number.NaN;
+let lastFactor = 1;
 export function extraterrestrialNormal_W_m2(dayOfYear: number, solarConstant_W_m2 = SOLAR_CONSTANT_W_M2): number {
-  const g = (2 * Math.PI * (dayOfYear - 1)) / 365;
-  return solarConstant_W_m2 * (1.00011 + 0.034221 * Math.cos(g) + 0.00128 * Math.sin(g) + 0.000719 * Math.cos(2 * g) + 0.000077 * Math.sin(2 * g));
+  if (dayOfYear !== lastDoy) {
+    const g = (2 * Math.PI * (dayOfYear - 1)) / 365;
+    lastFactor = 1.00011 + 0.034221 * Math.cos(g) + 0.00128 * Math.sin(g) + 0.000719 * Math.cos(2 * g) + 0.000077 * Math.sin(2 * g);
+    lastDoy = dayOfYear; // memoised: per-minute callers ask for the same day many times
+  }
+  return solarConstant_W_m2 * lastFactor;
 }
 
 /** Day of year (1–366) of a UT instant (memoised for the last day asked; per-minute callers repeat it). */

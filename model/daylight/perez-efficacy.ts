@@ -61,10 +61,10 @@ export function perezIlluminance(input: EfficacyInput): DaylightIlluminance {
   const dhi = Math.max(0, input.diffuseHorizontal_W_m2);
   const dni = Math.max(0, input.directNormal_W_m2);
   const zDeg = Math.min(input.zenith_deg, PEREZ_MAX_ZENITH_DEG);
-  const idx = perezSkyIndices(zDeg, dni, dhi, airMassKasten1966(zDeg), input.extraterrestrial_W_m2);
   if (!(dhi > 0)) {
-    return { directNormal_lx: 0, diffuseHorizontal_lx: 0, globalHorizontal_lx: 0, directEfficacy_lm_W: 0, diffuseEfficacy_lm_W: 0, indices: idx };
+    return { directNormal_lx: 0, diffuseHorizontal_lx: 0, globalHorizontal_lx: 0, directEfficacy_lm_W: 0, diffuseEfficacy_lm_W: 0, indices: { clearness: 1, brightness: 0, bin: 0 } };
   }
+  const idx = perezSkyIndices(zDeg, dni, dhi, airMassKasten1966(zDeg), input.extraterrestrial_W_m2);
   const bin = idx.bin;
   const delta = Math.max(idx.brightness, 0.01);
   const z = (zDeg * Math.PI) / 180;
