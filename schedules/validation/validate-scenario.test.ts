@@ -132,3 +132,59 @@ describe('measured light periods', () => {
     expect(validateScenarioValue(doc).problems.map((x) => x.path)).toEqual(['personas[1].measuredLight[0].from']);
   });
 });
+
+describe('schema and sense problems in one pass', () => {
+  it('reports schema errors together with sense errors in the parts that passed the schema', () => {
+    const doc = demoCopy() as {
+      site: Record<string, unknown>;
+      personas: (Record<string, unknown> & { templates: Record<string, { place: string }[]> })[];
+      rosters: { cycle: string[] }[];
+    };
+    const nurse = doc.personas[0];
+    const worker = doc.personas[1];
+    const seg = worker?.templates.workday?.[2];
+    const roster = doc.rosters[0];
+    if (nurse === undefined || seg === undefined || roster === undefined) throw new Error('demo changed');
+    nurse.age_y = -3; // schema error: the nurse is set aside, references to her are not repeated
+    doc.site.timeZone = 'Europe/Berln';
+    seg.place = 'trm';
+    roster.cycle[3] = 'lat';
+    const v = validateScenarioValue(doc);
+    expect(v.problems.map((p) => [p.severity, p.path])).toEqual([
+      ['error', 'personas[0].age_y'],
+      ['error', 'site.timeZone'],
+      ['error', 'personas[1].templates.workday[2].place'],
+      ['error', 'rosters[0].cycle[3]'],
+    ]);
+  });
+
+  it('keeps the original list positions in the paths when an earlier item failed the schema', () => {
+    const doc = demoCopy() as { places: Record<string, unknown>[] };
+    const first = doc.places[0];
+    const office = doc.places[4];
+    if (first === undefined || office === undefined) throw new Error('demo changed');
+    first.width_m = -1;
+    office.reflectances = { ceiling: 0.2, walls: 0.5, floor: 0.4 };
+    const v = validateScenarioValue(doc);
+    expect(v.problems.map((p) => [p.severity, p.path])).toEqual([
+      ['error', 'places[0].width_m'],
+      ['warning', 'places[4].reflectances.floor'],
+    ]);
+  });
+});
+
+describe('suggestions', () => {
+  it('suggests the intended time zone, place and shift for misspelt names', () => {
+    const doc = demoCopy() as { site: Record<string, unknown>; personas: { templates: Record<string, { place: string }[]> }[]; rosters: { cycle: string[] }[] };
+    doc.site.timeZone = 'Europe/Berln';
+    const seg = doc.personas[1]?.templates.workday?.[2];
+    const r = doc.rosters[0];
+    if (seg === undefined || r === undefined) throw new Error('demo changed');
+    seg.place = 'trm';
+    r.cycle[3] = 'lat';
+    const fixes = validateScenarioValue(doc).problems.map((p) => p.fix);
+    expect(fixes[0]).toMatch(/^Did you mean "Europe\/Berlin"\?/);
+    expect(fixes[1]).toMatch(/^Did you mean "tram"\?/);
+    expect(fixes[2]).toMatch(/^Did you mean "late"\?/);
+  });
+});

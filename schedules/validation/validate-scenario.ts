@@ -4,11 +4,17 @@
  */
 import { z } from 'zod';
 import { migrateScenario } from '../migration/migrate.js';
-import { scenarioSchema } from '../schema/scenario-schema.js';
+import { runSettingsSchema, scenarioSchema, SCENARIO_FORMAT, SCENARIO_FORMAT_VERSION } from '../schema/scenario-schema.js';
+import { siteSchema } from '../schema/site-schema.js';
+import { placeSchema } from '../schema/places-schema.js';
+import { personaSchema } from '../schema/personas-schema.js';
+import { rosterSchema } from '../schema/roster-schema.js';
+import { strategySchema } from '../schema/strategy-schema.js';
+import { lightLogSpecSchema } from '../schema/light-log-schema.js';
 import type { Scenario } from '../schema/scenario-types.js';
 import { problem, type ScenarioProblem } from './problem.js';
 import { schemaProblems } from './zod-problems.js';
-import { referenceChecks } from './sense/reference-checks.js';
+import { referenceChecks, type SetAsideIds } from './sense/reference-checks.js';
 import { siteChecks } from './sense/site-checks.js';
 import { personChecks } from './sense/person-checks.js';
 import { timingChecks } from './sense/timing-checks.js';
@@ -42,6 +48,74 @@ function allFieldNames(): readonly string[] {
   return fieldNames;
 }
 
+function senseChecks(scenario: Scenario, setAside?: SetAsideIds): ScenarioProblem[] {
+  return [...siteChecks(scenario), ...referenceChecks(scenario, setAside), ...personChecks(scenario), ...timingChecks(scenario)];
+}
+
+interface KeptItems<T> {
+  readonly items: T[];
+  /** Original index of each kept item. */
+  readonly originalIndex: number[];
+  readonly setAsideIds: Set<string>;
+}
+
+function keepValid<T>(list: unknown, schema: z.ZodType<T>): KeptItems<T> {
+  const kept: KeptItems<T> = { items: [], originalIndex: [], setAsideIds: new Set() };
+  if (!Array.isArray(list)) return kept;
+  list.forEach((item: unknown, i) => {
+    const r = schema.safeParse(item);
+    if (r.success) {
+      kept.items.push(r.data);
+      kept.originalIndex.push(i);
+    } else if (item !== null && typeof item === 'object' && typeof (item as { id?: unknown }).id === 'string') {
+      kept.setAsideIds.add((item as { id: string }).id);
+    }
+  });
+  return kept;
+}
+
+/**
+ * Sense checks on the parts of a document that passed the schema, so one run lists schema and
+ * sense problems together. Items that failed the schema are left out, references to them are
+ * not reported again, and paths point at the original list positions.
+ */
+function partialSenseChecks(doc: unknown): ScenarioProblem[] {
+  if (doc === null || typeof doc !== 'object') return [];
+  const d = doc as Record<string, unknown>;
+  const run = runSettingsSchema.safeParse(d.run);
+  const site = siteSchema.safeParse(d.site);
+  if (!run.success || !site.success) return [];
+  const places = keepValid(d.places, placeSchema);
+  const personas = keepValid(d.personas, personaSchema);
+  const rosters = keepValid(d.rosters, rosterSchema);
+  const strategies = keepValid(d.strategies, strategySchema);
+  const lightLogs = keepValid(d.lightLogs, lightLogSpecSchema);
+  const partial: Scenario = {
+    format: SCENARIO_FORMAT,
+    version: SCENARIO_FORMAT_VERSION,
+    name: 'partial',
+    run: run.data,
+    site: site.data,
+    places: places.items,
+    personas: personas.items,
+    rosters: rosters.items,
+    strategies: strategies.items,
+    lightLogs: lightLogs.items,
+  };
+  const setAside: SetAsideIds = { places: places.setAsideIds, personas: personas.setAsideIds, rosters: rosters.setAsideIds, lightLogs: lightLogs.setAsideIds };
+  const maps: Record<string, number[]> = {
+    places: places.originalIndex,
+    personas: personas.originalIndex,
+    rosters: rosters.originalIndex,
+    strategies: strategies.originalIndex,
+    lightLogs: lightLogs.originalIndex,
+  };
+  return senseChecks(partial, setAside).map((p) => ({
+    ...p,
+    path: p.path.replace(/^(places|personas|rosters|strategies|lightLogs)\[(\d+)\]/, (whole, key: string, index: string) => `${key}[${maps[key]?.[Number(index)] ?? index}]`),
+  }));
+}
+
 /** Validates an already-parsed JSON value. */
 export function validateScenarioValue(input: unknown): ScenarioValidation {
   const migrated = migrateScenario(input);
@@ -50,10 +124,11 @@ export function validateScenarioValue(input: unknown): ScenarioValidation {
   }
   const parsed = scenarioSchema.safeParse(migrated.value);
   if (!parsed.success) {
-    return { ok: false, scenario: undefined, problems: schemaProblems(parsed.error, migrated.value, allFieldNames), migratedFrom: migrated.fromVersion, migrations: migrated.applied };
+    const problems = [...schemaProblems(parsed.error, migrated.value, allFieldNames), ...partialSenseChecks(migrated.value)];
+    return { ok: false, scenario: undefined, problems, migratedFrom: migrated.fromVersion, migrations: migrated.applied };
   }
   const scenario = parsed.data;
-  const problems = [...siteChecks(scenario), ...referenceChecks(scenario), ...personChecks(scenario), ...timingChecks(scenario)];
+  const problems = senseChecks(scenario);
   const ok = !problems.some((p) => p.severity === 'error');
   return { ok, scenario: ok ? scenario : undefined, problems, migratedFrom: migrated.fromVersion, migrations: migrated.applied };
 }

@@ -1,6 +1,7 @@
 /** Turns schema issues into problems with a path and a plain-language fix. */
 import type { z } from 'zod';
 import { problem, type ScenarioProblem } from './problem.js';
+import { nearest } from './suggest.js';
 
 function valueAt(root: unknown, path: readonly PropertyKey[]): unknown {
   let v: unknown = root;
@@ -30,35 +31,6 @@ const EXAMPLES: Record<string, string> = {
   object: 'an object in braces { … }',
   boolean: 'true or false',
 };
-
-/** Edit distance, to suggest the intended field name for a misspelt one. */
-function editDistance(a: string, b: string): number {
-  const row = Array.from({ length: b.length + 1 }, (_, j) => j);
-  for (let i = 1; i <= a.length; i++) {
-    let prev = row[0] ?? 0;
-    row[0] = i;
-    for (let j = 1; j <= b.length; j++) {
-      const tmp = row[j] ?? 0;
-      row[j] = Math.min((row[j] ?? 0) + 1, (row[j - 1] ?? 0) + 1, prev + (a[i - 1]?.toLowerCase() === b[j - 1]?.toLowerCase() ? 0 : 1));
-      prev = tmp;
-    }
-  }
-  return row[b.length] ?? 0;
-}
-
-function nearest(key: string, candidates: readonly string[]): string | undefined {
-  let best: string | undefined;
-  let bestD = Infinity;
-  for (const c of candidates) {
-    // A field written without its unit suffix (latitude for latitude_deg) counts as a near miss.
-    const d = c.toLowerCase().startsWith(key.toLowerCase() + '_') ? 1 : editDistance(key, c);
-    if (d < bestD) {
-      bestD = d;
-      best = c;
-    }
-  }
-  return best !== undefined && bestD <= Math.max(2, Math.floor(key.length / 3)) ? best : undefined;
-}
 
 function issueToProblems(issue: z.core.$ZodIssue, input: unknown, knownKeys: (path: readonly PropertyKey[]) => readonly string[]): ScenarioProblem[] {
   const path = issue.path;

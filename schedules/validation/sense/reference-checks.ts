@@ -3,6 +3,7 @@ import type { Persona, Place, Scenario, Segment, SegmentPatch } from '../../sche
 import { REST_DAY } from '../../schema/roster-schema.js';
 import { WEEKDAYS } from '../../schema/primitives.js';
 import { problem, type PathPart, type ScenarioProblem } from '../problem.js';
+import { didYouMean } from '../suggest.js';
 import { parseDateTimeAtSite } from '../../timeline/expand-scenario.js';
 
 function duplicates<T extends { id: string }>(items: readonly T[], path: readonly PathPart[], what: string, out: ScenarioProblem[]): void {
@@ -27,7 +28,20 @@ function screenIdsFor(place: Place | undefined, persona: Persona): Set<string> {
   return ids;
 }
 
-export function referenceChecks(s: Scenario): ScenarioProblem[] {
+/**
+ * Identifiers of items that failed the schema and were left out of a partial check: references
+ * to them are not reported again.
+ */
+export interface SetAsideIds {
+  readonly places: ReadonlySet<string>;
+  readonly personas: ReadonlySet<string>;
+  readonly rosters: ReadonlySet<string>;
+  readonly lightLogs: ReadonlySet<string>;
+}
+
+const NONE: SetAsideIds = { places: new Set(), personas: new Set(), rosters: new Set(), lightLogs: new Set() };
+
+export function referenceChecks(s: Scenario, setAside: SetAsideIds = NONE): ScenarioProblem[] {
   const out: ScenarioProblem[] = [];
   const places = new Map(s.places.map((p) => [p.id, p]));
   const personas = new Map(s.personas.map((p) => [p.id, p]));
@@ -51,15 +65,16 @@ export function referenceChecks(s: Scenario): ScenarioProblem[] {
 
   const checkPlace = (id: string, path: readonly PathPart[], kinds?: readonly Place['kind'][]): void => {
     const p = places.get(id);
+    if (p === undefined && setAside.places.has(id)) return;
     if (p === undefined) {
-      out.push(problem('error', path, `there is no place "${id}"`, `Use one of the places: ${listIds(places.keys())}, or add a place with this identifier.`));
+      out.push(problem('error', path, `there is no place "${id}"`, `${didYouMean(id, places.keys())}Use one of the places: ${listIds(places.keys())}, or add a place with this identifier.`));
     } else if (kinds !== undefined && !kinds.includes(p.kind)) {
       out.push(problem('error', path, `place "${id}" is a ${p.kind}, but a ${kinds.join(' or ')} is needed here`, `Refer to a ${kinds.join(' or ')}.`));
     }
   };
   const checkSegment = (seg: { place: string; screen?: string | undefined; eyewear?: string | undefined }, persona: Persona, path: readonly PathPart[]): void => {
     checkPlace(seg.place, [...path, 'place']);
-    if (seg.screen !== undefined) {
+    if (seg.screen !== undefined && !setAside.places.has(seg.place)) {
       const ids = screenIdsFor(places.get(seg.place), persona);
       if (!ids.has(seg.screen)) out.push(problem('error', [...path, 'screen'], `screen "${seg.screen}" is neither in place "${seg.place}" nor one of ${persona.name}'s devices`, `Use one of: ${listIds(ids)}, or add the screen to the room or to the persona's devices.`));
     }
@@ -95,11 +110,11 @@ export function referenceChecks(s: Scenario): ScenarioProblem[] {
       for (const day of WEEKDAYS) {
         const plan = persona.week[day];
         if (typeof plan === 'string') {
-          if (!(plan in persona.templates)) out.push(problem('error', [...base, 'week', day], `there is no day template "${plan}"`, `Use one of the templates: ${listIds(Object.keys(persona.templates))}, or write the day's segments here.`));
+          if (!(plan in persona.templates)) out.push(problem('error', [...base, 'week', day], `there is no day template "${plan}"`, `${didYouMean(plan, Object.keys(persona.templates))}Use one of the templates: ${listIds(Object.keys(persona.templates))}, or write the day's segments here.`));
         } else plan.forEach((seg, k) => checkSegment(seg, persona, [...base, 'week', day, k]));
       }
     }
-    if (persona.roster !== undefined && !rosters.has(persona.roster.roster)) {
+    if (persona.roster !== undefined && !rosters.has(persona.roster.roster) && !setAside.rosters.has(persona.roster.roster)) {
       out.push(problem('error', [...base, 'roster', 'roster'], `there is no roster "${persona.roster.roster}"`, `Use one of: ${listIds(rosters.keys())}.`));
     }
     persona.measuredLight.forEach((m, k) => {
@@ -109,7 +124,7 @@ export function referenceChecks(s: Scenario): ScenarioProblem[] {
       if (m.from !== undefined && from === undefined) out.push(problem('error', [...base, 'measuredLight', k, 'from'], `${m.from} is not a real date-time`, 'Write an existing date and time.'));
       if (m.to !== undefined && to === undefined) out.push(problem('error', [...base, 'measuredLight', k, 'to'], `${m.to} is not a real date-time`, 'Write an existing date and time.'));
       if (from !== undefined && to !== undefined && to <= from) out.push(problem('error', [...base, 'measuredLight', k, 'to'], 'the period ends before it starts', 'Make "to" later than "from".'));
-      if (!logs.has(m.log)) out.push(problem('error', [...base, 'measuredLight', k, 'log'], `there is no light log "${m.log}"`, `Add it to "lightLogs" or use one of: ${listIds(logs)}.`));
+      if (!logs.has(m.log) && !setAside.lightLogs.has(m.log)) out.push(problem('error', [...base, 'measuredLight', k, 'log'], `there is no light log "${m.log}"`, `Add it to "lightLogs" or use one of: ${listIds(logs)}.`));
     });
   });
 
@@ -122,7 +137,7 @@ export function referenceChecks(s: Scenario): ScenarioProblem[] {
       checkPlace(sh.place, [...base, 'shifts', k, 'place']);
     });
     r.cycle.forEach((c, k) => {
-      if (c !== REST_DAY && !shiftIds.has(c)) out.push(problem('error', [...base, 'cycle', k], `"${c}" is not a shift of this roster`, `Use "${REST_DAY}" or one of: ${listIds(shiftIds)}.`));
+      if (c !== REST_DAY && !shiftIds.has(c)) out.push(problem('error', [...base, 'cycle', k], `"${c}" is not a shift of this roster`, `${didYouMean(c, shiftIds)}Use "${REST_DAY}" or one of: ${listIds(shiftIds)}.`));
     });
     if (r.commute !== undefined) checkPlace(r.commute.place, [...base, 'commute', 'place'], ['vehicle', 'outdoors']);
     if (r.sleep.place !== undefined) checkPlace(r.sleep.place, [...base, 'sleep', 'place'], ['room']);
@@ -130,7 +145,7 @@ export function referenceChecks(s: Scenario): ScenarioProblem[] {
 
   s.strategies.forEach((st, i) => {
     st.personas?.forEach((id, k) => {
-      if (!personas.has(id)) out.push(problem('error', ['strategies', i, 'personas', k], `there is no persona "${id}"`, `Use one of: ${listIds(personas.keys())}.`));
+      if (!personas.has(id) && !setAside.personas.has(id)) out.push(problem('error', ['strategies', i, 'personas', k], `there is no persona "${id}"`, `Use one of: ${listIds(personas.keys())}.`));
     });
     st.changes.forEach((c, k) => {
       const path: PathPart[] = ['strategies', i, 'changes', k];
@@ -166,6 +181,7 @@ export function referenceChecks(s: Scenario): ScenarioProblem[] {
             if (room?.kind === 'room' && !room.screens.some((sc) => sc.id === c.screen)) out.push(problem('error', [...path, 'screen'], `room "${c.place}" has no screen "${c.screen}"`, `Use one of: ${listIds(room.screens.map((sc) => sc.id))}.`));
           } else if (c.persona !== undefined) {
             const p = personas.get(c.persona);
+            if (p === undefined && setAside.personas.has(c.persona)) break;
             if (p === undefined) out.push(problem('error', [...path, 'persona'], `there is no persona "${c.persona}"`, `Use one of: ${listIds(personas.keys())}.`));
             else if (!p.devices.some((d) => d.id === c.screen)) out.push(problem('error', [...path, 'screen'], `${p.name} carries no device "${c.screen}"`, `Use one of: ${listIds(p.devices.map((d) => d.id))}.`));
           }
@@ -174,6 +190,7 @@ export function referenceChecks(s: Scenario): ScenarioProblem[] {
         case 'add-segment':
         case 'modify-segments': {
           const p = personas.get(c.persona);
+          if (p === undefined && setAside.personas.has(c.persona)) break;
           if (p === undefined) {
             out.push(problem('error', [...path, 'persona'], `there is no persona "${c.persona}"`, `Use one of: ${listIds(personas.keys())}.`));
             break;

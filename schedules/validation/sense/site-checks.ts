@@ -2,6 +2,7 @@
 import type { Scenario } from '../../schema/scenario-types.js';
 import { isValidTimeZone, parseIsoDate, utcOffsetAt_min } from '../../time/local-calendar.js';
 import { problem, type ScenarioProblem } from '../problem.js';
+import { didYouMean, knownTimeZones } from '../suggest.js';
 
 /** Sky shares may be written to two decimals; allow their rounding. */
 const SHARE_SUM_TOLERANCE = 0.011;
@@ -16,7 +17,7 @@ export function siteChecks(s: Scenario): ScenarioProblem[] {
   if (parseIsoDate(s.run.startDate) === undefined) out.push(problem('error', ['run', 'startDate'], `${s.run.startDate} is not a real date`, 'Write an existing calendar date "YYYY-MM-DD".'));
   const site = s.site;
   if (!isValidTimeZone(site.timeZone)) {
-    out.push(problem('error', ['site', 'timeZone'], `"${site.timeZone}" is not a known IANA time zone`, 'Use a name from the IANA time-zone database such as "Europe/Berlin" or "America/New_York" (not an abbreviation like "CET").'));
+    out.push(problem('error', ['site', 'timeZone'], `"${site.timeZone}" is not a known IANA time zone`, didYouMean(site.timeZone, knownTimeZones()) + 'Use a name from the IANA time-zone database such as "Europe/Berlin" or "America/New_York" (not an abbreviation like "CET").'));
   } else {
     const year = Number(s.run.startDate.slice(0, 4)) || 2026;
     const jan = utcOffsetAt_min(site.timeZone, Date.UTC(year, 0, 15));
