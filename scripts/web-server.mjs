@@ -30,9 +30,10 @@ async function contentSecurityPolicy(root) {
   return `${match[1]}; frame-ancestors 'none'`;
 }
 
-export async function buildRenderer() {
+/** Builds the renderer into `outDir` (default renderer/dist). */
+export async function buildRenderer(outDir = RENDERER_DIST) {
   const { build } = await import('vite');
-  await build({ configFile: path.join(repoRoot, 'vite.config.ts'), logLevel: 'warn' });
+  await build({ configFile: path.join(repoRoot, 'vite.config.ts'), logLevel: 'warn', build: { outDir, emptyOutDir: true } });
 }
 
 /** Serves `root` on 127.0.0.1; resolves to { url, close }. */

@@ -1,7 +1,7 @@
 // End-to-end harness: Debian's Chromium driven by playwright-core, headless, with a fresh
 // profile and no network services; the renderer built and served by scripts/web-server.mjs.
 import { mkdtemp, mkdir, rm } from 'node:fs/promises';
-import { existsSync } from 'node:fs';
+import { existsSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import * as path from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
@@ -20,8 +20,8 @@ interface WebServer {
 
 // The server module is plain JavaScript; its shape is declared here.
 interface WebServerModule {
-  buildRenderer(): Promise<void>;
-  serveRenderer(options?: { port?: number }): Promise<WebServer>;
+  buildRenderer(outDir?: string): Promise<void>;
+  serveRenderer(options?: { port?: number; root?: string }): Promise<WebServer>;
 }
 
 export interface Session {
@@ -32,21 +32,26 @@ export interface Session {
   close(): Promise<void>;
 }
 
-let built: Promise<WebServerModule> | null = null;
+let built: Promise<{ server: WebServerModule; root: string }> | null = null;
 
-/** Builds the renderer once per test file, then reuses the build. */
-function builtRenderer(): Promise<WebServerModule> {
+/**
+ * Builds the renderer once per test file into a private folder (so parallel test files and a
+ * running `npm run web` never share a build), then reuses it.
+ */
+function builtRenderer(): Promise<{ server: WebServerModule; root: string }> {
   built ??= (async () => {
     const server = (await import(path.resolve(import.meta.dirname, '..', '..', 'scripts', 'web-server.mjs'))) as WebServerModule;
-    await server.buildRenderer();
-    return server;
+    const root = await mkdtemp(path.join(tmpdir(), 'zeitlight-renderer-'));
+    process.once('exit', () => rmSync(root, { recursive: true, force: true }));
+    await server.buildRenderer(root);
+    return { server, root };
   })();
   return built;
 }
 
 export async function startSession(): Promise<Session> {
-  const server = await builtRenderer();
-  const web = await server.serveRenderer({ port: 0 });
+  const { server, root } = await builtRenderer();
+  const web = await server.serveRenderer({ port: 0, root });
   const profile = await mkdtemp(path.join(tmpdir(), 'zeitlight-chromium-'));
   await mkdir(ARTIFACTS, { recursive: true });
   // A fresh profile directory per session (playwright passes it as --user-data-dir).
