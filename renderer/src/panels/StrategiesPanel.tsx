@@ -2,8 +2,11 @@
 import type { ScenarioInput } from '../scenario/scenario-types.js';
 import { describeChange } from '../scenario/strategy-description.js';
 import { NumberField, TextField } from '../components/fields.js';
+import { duplicateStrategy, removeStrategy } from '../scenario/strategy-edits.js';
+import { useController } from '../state/workspace-context.js';
 
 export function StrategiesPanel({ scenario }: { scenario: ScenarioInput }) {
+  const controller = useController();
   const strategies = scenario.strategies ?? [];
   const personName = (id: string) => scenario.personas.find((p) => p.id === id)?.name ?? id;
   return (
@@ -19,6 +22,14 @@ export function StrategiesPanel({ scenario }: { scenario: ScenarioInput }) {
             <header className="card-header">
               <h3>{strategy.name}</h3>
               <code className="id">{strategy.id}</code>
+              <span className="card-actions">
+                <button type="button" className="button button-small" onClick={() => controller.store.edit((sc) => duplicateStrategy(sc, strategy.id))}>
+                  Duplicate
+                </button>
+                <button type="button" className="button button-small" onClick={() => controller.store.edit((sc) => removeStrategy(sc, strategy.id))}>
+                  Remove
+                </button>
+              </span>
             </header>
             {strategy.description !== undefined && <p className="muted">{strategy.description}</p>}
             <p className="small">For: {strategy.personas === undefined ? 'everyone' : strategy.personas.map(personName).join(', ')}</p>
