@@ -87,6 +87,17 @@ describe.skipIf(!available)('workspace in the browser', () => {
     await screenshot(s.page, 'places');
   });
 
+  it('checks edits in the worker and lists a problem with its path until it is undone', async () => {
+    await s.page.getByRole('button', { name: 'Site', exact: true }).click();
+    await s.page.getByLabel('Latitude').fill('200');
+    const problems = s.page.locator('details.problems');
+    await expect.poll(() => problems.innerText(), { timeout: 20_000 }).toContain('site.latitude_deg');
+    await expect.poll(() => s.page.locator('.run-state').innerText()).toBe('Needs fixes');
+    await screenshot(s.page, 'site-problem');
+    await s.page.getByRole('button', { name: 'Undo' }).click();
+    await expect.poll(() => problems.count(), { timeout: 20_000 }).toBe(0);
+  });
+
   it('keeps the cautions visible in the results views', async () => {
     await s.page.getByRole('button', { name: 'Compare', exact: true }).click();
     const cautions = s.page.getByRole('complementary', { name: 'Cautions' });
@@ -108,6 +119,15 @@ describe.skipIf(!available)('workspace in the browser', () => {
     await s.page.getByRole('button', { name: 'Compare', exact: true }).click();
     await s.page.getByRole('combobox', { name: 'Person' }).selectOption('desk-worker');
     expect(Number(await dlmo())).toBeLessThan(before);
+  });
+
+  it('starts empty without a scenario and creates a new one that passes the format checks', async () => {
+    await s.page.goto(s.url);
+    await s.page.getByRole('button', { name: 'New scenario' }).click();
+    await s.page.getByRole('heading', { name: 'People' }).waitFor();
+    await expect.poll(() => s.page.locator('.run-state').innerText(), { timeout: 20_000 }).toMatch(/not connected|up to date/);
+    await expect(s.page.locator('details.problems-error').count()).resolves.toBe(0);
+    await expect.poll(() => s.page.title()).toMatch(/^• Untitled/);
   });
 
   it('reports no script or Content-Security-Policy errors', () => {
