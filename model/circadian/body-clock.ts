@@ -49,7 +49,7 @@ export interface BodyClockResult {
   readonly xmin_h: number[];
   readonly cbtmin_h: number[];
   readonly dlmo_h: number[];
-  /** Acute suppression per night (%), null where the dim-light reference is ~0. */
+  /** Acute suppression per night (%), null where the dim-light reference is ~0 or the run ends inside the night. */
   readonly melatonin_suppression_pct: (number | null)[];
   /** Mean KSS of each clock hour while awake; null for hours spent asleep. */
   readonly kss_hourly: (number | null)[];
@@ -119,7 +119,9 @@ export function runBodyClock(input: BodyClockInput): BodyClockResult {
     xmin_h: run.xmin_h,
     cbtmin_h: run.cbtmin_h,
     dlmo_h: run.cbtmin_h.map((t) => t - DLMO_BEFORE_CBTMIN_H),
-    melatonin_suppression_pct: run.nights.map((n) => (n.dimAuc_pmol_h_L >= MIN_NIGHT_AUC && Number.isFinite(n.acuteSuppression_pct) ? n.acuteSuppression_pct : null)),
+    melatonin_suppression_pct: run.nights.map((n) =>
+      n.complete && n.dimAuc_pmol_h_L >= MIN_NIGHT_AUC && Number.isFinite(n.acuteSuppression_pct) ? n.acuteSuppression_pct : null,
+    ),
     kss_hourly: kss,
     kss_sleepy_hours: kss.flatMap((v, k) => (v !== null && v >= KSS_SLEEPY ? [k] : [])),
     sleep_episodes: run.sleepEpisodes,

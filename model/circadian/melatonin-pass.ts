@@ -75,7 +75,15 @@ export interface MelatoninNight {
   readonly acuteSuppression_pct: number;
   readonly auc_pmol_h_L: number;
   readonly dimAuc_pmol_h_L: number;
+  /**
+   * False when the run ends before the night is over (no synthesis offset inside it, or less than
+   * NIGHT_TAIL_H after it): the areas then cover only part of the night.
+   */
+  readonly complete: boolean;
 }
+
+/** Time after the synthesis offset for plasma melatonin to clear (h; ≈ 8 half-lives of 28 min). */
+export const NIGHT_TAIL_H = 4;
 
 export interface MelatoninPassResult {
   readonly final: MelatoninState;
@@ -217,9 +225,12 @@ export function melatoninPass(inp: MelatoninPassInput): MelatoninPassResult {
     const next = onsets[i + 1];
     const a = (next?.auc ?? auc) - o.auc;
     const d = (next?.dim ?? aucDim) - o.dim;
+    const end = next?.t ?? tEnd;
+    const offset = switches.find((w) => !w.on && w.t_h > o.t && w.t_h < end);
     return {
       onset_h: o.t,
-      end_h: next?.t ?? tEnd,
+      end_h: end,
+      complete: offset !== undefined && end - offset.t_h >= NIGHT_TAIL_H,
       auc_pmol_h_L: a,
       dimAuc_pmol_h_L: d,
       acuteSuppression_pct: d > 0 ? 100 * (1 - a / d) : Number.NaN,

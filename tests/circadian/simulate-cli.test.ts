@@ -35,6 +35,11 @@ describe('zeitlight simulate', () => {
     cbt.forEach((c) => expect(7 - (c % 24)).toBeGreaterThan(1.5));
     dlmo.forEach((d, i) => expect((cbt[i] as number) - d).toBe(7));
     expect((doc.kss_hourly as unknown[]).length).toBe(72);
+    // nights 0 and 1 complete and alike (same light each day); night 2 is cut by the end of the run
+    const supp = doc.melatonin_suppression_pct as (number | null)[];
+    expect(supp.length).toBe(3);
+    expect(Math.abs((supp[0] as number) - (supp[1] as number))).toBeLessThan(1);
+    expect(supp[2]).toBeNull();
     expect((doc.kss_hourly as unknown[])[2]).toBeNull(); // asleep at 02:00
   });
 
