@@ -79,7 +79,7 @@ export function createOdexIntegrator(tolerances: OdexTolerances = ODEX_DEFAULT_T
             const u = 1 - th;
             return (1 + 2 * th) * u * u * (ya[i] as number) + th * u * u * h * (fa[i] as number) + th * th * (3 - 2 * th) * (y[i] as number) - th * th * u * h * (fb[i] as number);
           };
-          yPrev = [...y];
+          yPrev = y; // odex hands out a fresh copy of the state on every call
           fPrev = fb;
         } else dense = odexDense as DenseSolution;
         const ts = observe(tOld, t, y, dense);
