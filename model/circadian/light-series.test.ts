@@ -13,6 +13,14 @@ describe('light series', () => {
     expect(lightAt(s, 12)).toBe(150);
   });
 
+  it('merges nearly equal minutes at their mean level when asked, and only then', () => {
+    const v = [100, 101, 102, 103, 200, 200];
+    expect(lightFromPerMinute(v, 'native_lx').level.length).toBe(5);
+    const merged = lightFromPerMinute(v, 'native_lx', 0, { relative: 0.05 });
+    expect(Array.from(merged.level)).toEqual([101.5, 200]);
+    expect(Array.from(merged.start_h)).toEqual([0, 4 / 60]);
+  });
+
   it('refuses negative or non-finite light naming the value index', () => {
     expect(() => lightFromPerMinute([1, -2], 'native_lx')).toThrow(/value 1/);
     expect(() => lightFromSteps([0, 0], [1, 2], 'native_lx')).toThrow(/time 1/);

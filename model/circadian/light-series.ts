@@ -27,30 +27,56 @@ export interface LightSeries {
 }
 
 /**
+ * Merging of nearly equal minutes (for light that varies a little every minute, e.g. daylight at
+ * the eye): a run of minutes becomes one segment at its mean level while
+ * max − min ≤ relative · max + absolute_lx over the run. Default: exact (only equal values merge).
+ */
+export interface PerMinuteMerge {
+  readonly relative?: number;
+  readonly absolute_lx?: number;
+}
+
+/**
  * Builds a series from per-minute levels (e.g. 1440 values per day of light at the eye).
  * Consecutive equal values merge into one segment, so a day with four light changes gives
  * five segments and the solver restarts only four times. O(n), no allocation per value
- * beyond the two output arrays.
+ * beyond the output arrays. With `merge`, nearly equal minutes merge too (see PerMinuteMerge):
+ * each restart costs about as much as several solver steps, so light that changes every minute
+ * should be merged (or given as smooth pieces) rather than passed minute by minute.
  */
-export function lightFromPerMinute(values: ArrayLike<number>, unit: LightUnit, start_h = 0): LightSeries {
+export function lightFromPerMinute(values: ArrayLike<number>, unit: LightUnit, start_h = 0, merge?: PerMinuteMerge): LightSeries {
   const n = values.length;
   if (n === 0) throw new Error('light series: no values');
-  let count = 1;
-  for (let i = 1; i < n; i++) if (values[i] !== values[i - 1]) count++;
-  const start = new Float64Array(count);
-  const level = new Float64Array(count);
-  let k = 0;
-  start[0] = start_h;
-  level[0] = checkedLevel(values[0] as number, 0);
+  const rel = merge?.relative ?? 0;
+  const abs = merge?.absolute_lx ?? 0;
+  const starts: number[] = [];
+  const levels: number[] = [];
+  let segStart = 0;
+  let lo = checkedLevel(values[0] as number, 0);
+  let hi = lo;
+  let sum = lo;
+  const close = (end: number) => {
+    starts.push(start_h + segStart / 60);
+    levels.push(lo === hi ? lo : sum / (end - segStart));
+  };
   for (let i = 1; i < n; i++) {
-    const v = values[i] as number;
-    if (v !== values[i - 1]) {
-      k++;
-      start[k] = start_h + i / 60;
-      level[k] = checkedLevel(v, i);
+    const v = checkedLevel(values[i] as number, i);
+    const nlo = v < lo ? v : lo;
+    const nhi = v > hi ? v : hi;
+    if (nhi - nlo <= rel * nhi + abs) {
+      lo = nlo;
+      hi = nhi;
+      sum += v;
+      continue;
     }
+    close(i);
+    segStart = i;
+    lo = v;
+    hi = v;
+    sum = v;
   }
-  return { unit, start_h: start, level, end_h: start_h + n / 60 };
+  close(n);
+  return { unit, start_h: Float64Array.from(starts), level: Float64Array.from(levels), end_h: start_h + n / 60 };
 }
 
 function checkedLevel(v: number, index: number): number {
