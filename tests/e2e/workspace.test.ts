@@ -8,6 +8,9 @@ import { chromiumAvailable, screenshot, startSession, type Session } from './bro
 
 const available = chromiumAvailable();
 
+/** Waits for a value in the page; generous because CI machines are shared and slow. */
+const poll = <T>(read: () => Promise<T> | T, options: { timeout?: number } = {}) => expect.poll(read, { timeout: 20_000, ...options });
+
 describe.skipIf(!available)('workspace in the browser', () => {
   let s: Session;
 
@@ -39,18 +42,18 @@ describe.skipIf(!available)('workspace in the browser', () => {
     await form.getByLabel('Place', { exact: true }).selectOption('park');
     await form.getByLabel('Activity', { exact: true }).selectOption('exercise');
     await form.getByRole('button', { name: 'Add segment' }).click();
-    await expect.poll(() => tuesdaySegments().count()).toBe(before + 1);
+    await poll(() => tuesdaySegments().count()).toBe(before + 1);
     await expect(s.page.locator('button.segment[aria-label="Tuesday 12:35–12:55, exercise at Fernbrook park path"]').count()).resolves.toBe(1);
-    await expect.poll(() => s.page.title()).toMatch(/^• Demo scenario/);
+    await poll(() => s.page.title()).toMatch(/^• Demo scenario/);
     await screenshot(s.page, 'people-segment-added');
 
     await s.page.getByRole('button', { name: 'Undo' }).click();
-    await expect.poll(() => tuesdaySegments().count()).toBe(before);
+    await poll(() => tuesdaySegments().count()).toBe(before);
     await s.page.getByRole('button', { name: 'Redo' }).click();
-    await expect.poll(() => tuesdaySegments().count()).toBe(before + 1);
+    await poll(() => tuesdaySegments().count()).toBe(before + 1);
     await s.page.keyboard.press('Control+z');
-    await expect.poll(() => tuesdaySegments().count()).toBe(before);
-    await expect.poll(() => s.page.title()).toMatch(/^Demo scenario/);
+    await poll(() => tuesdaySegments().count()).toBe(before);
+    await poll(() => s.page.title()).toMatch(/^Demo scenario/);
   });
 
   it('moves and resizes a segment from the keyboard', async () => {
@@ -72,10 +75,10 @@ describe.skipIf(!available)('workspace in the browser', () => {
     await card.waitFor();
     const lux = card.getByLabel('Illuminance at the eye');
     await lux.fill('900');
-    await expect.poll(() => card.locator('.change-list').innerText()).toContain('900 lx at the eye');
+    await poll(() => card.locator('.change-list').innerText()).toContain('900 lx at the eye');
     await screenshot(s.page, 'strategies');
     await s.page.getByRole('button', { name: 'Undo' }).click();
-    await expect.poll(() => card.locator('.change-list').innerText()).toContain('450 lx at the eye');
+    await poll(() => card.locator('.change-list').innerText()).toContain('450 lx at the eye');
   });
 
   it('shows the site and places editors', async () => {
@@ -91,11 +94,11 @@ describe.skipIf(!available)('workspace in the browser', () => {
     await s.page.getByRole('button', { name: 'Site', exact: true }).click();
     await s.page.getByLabel('Latitude').fill('200');
     const problems = s.page.locator('details.problems');
-    await expect.poll(() => problems.innerText(), { timeout: 20_000 }).toContain('site.latitude_deg');
-    await expect.poll(() => s.page.locator('.run-state').innerText()).toBe('Needs fixes');
+    await poll(() => problems.innerText(), { timeout: 20_000 }).toContain('site.latitude_deg');
+    await poll(() => s.page.locator('.run-state').innerText()).toBe('Needs fixes');
     await screenshot(s.page, 'site-problem');
     await s.page.getByRole('button', { name: 'Undo' }).click();
-    await expect.poll(() => problems.count(), { timeout: 20_000 }).toBe(0);
+    await poll(() => problems.count(), { timeout: 20_000 }).toBe(0);
   });
 
   it('keeps the cautions visible in the results views', async () => {
@@ -107,7 +110,7 @@ describe.skipIf(!available)('workspace in the browser', () => {
 
   it('brighter morning light moves the body clock earlier when the engine is connected', async (ctx) => {
     await s.page.goto(`${s.url}?open=demo`);
-    await expect.poll(() => s.page.locator('.run-state').innerText(), { timeout: 120_000 }).not.toMatch(/Simulating|Idle/);
+    await poll(() => s.page.locator('.run-state').innerText(), { timeout: 120_000 }).not.toMatch(/Simulating|Idle/);
     if ((await s.page.locator('.run-state').innerText()).includes('not connected')) ctx.skip();
     const dlmo = () => s.page.locator('td[data-metric="dlmo"][data-strategy="office-tunable-white"]').getAttribute('data-value');
     await s.page.getByRole('button', { name: 'Compare', exact: true }).click();
@@ -115,7 +118,7 @@ describe.skipIf(!available)('workspace in the browser', () => {
     const before = Number(await dlmo());
     await s.page.getByRole('button', { name: 'Strategies', exact: true }).click();
     await s.page.getByRole('article', { name: 'Tunable white: brighter day, warmer afternoon' }).getByLabel('Illuminance at the eye').fill('1500');
-    await expect.poll(() => s.page.locator('.run-state').innerText(), { timeout: 120_000 }).toBe('Results up to date');
+    await poll(() => s.page.locator('.run-state').innerText(), { timeout: 120_000 }).toBe('Results up to date');
     await s.page.getByRole('button', { name: 'Compare', exact: true }).click();
     await s.page.getByRole('combobox', { name: 'Person' }).selectOption('desk-worker');
     expect(Number(await dlmo())).toBeLessThan(before);
@@ -125,9 +128,9 @@ describe.skipIf(!available)('workspace in the browser', () => {
     await s.page.goto(s.url);
     await s.page.getByRole('button', { name: 'New scenario' }).click();
     await s.page.getByRole('heading', { name: 'People' }).waitFor();
-    await expect.poll(() => s.page.locator('.run-state').innerText(), { timeout: 20_000 }).toMatch(/not connected|up to date/);
+    await poll(() => s.page.locator('.run-state').innerText(), { timeout: 20_000 }).toMatch(/not connected|up to date/);
     await expect(s.page.locator('details.problems-error').count()).resolves.toBe(0);
-    await expect.poll(() => s.page.title()).toMatch(/^• Untitled/);
+    await poll(() => s.page.title()).toMatch(/^• Untitled/);
   });
 
   it('reports no script or Content-Security-Policy errors', () => {
