@@ -1,0 +1,150 @@
+// Results of one persona: light at the eye by source with the recommendation bands (baseline and
+// recommended strategy), phase by day, melatonin, KSS by hour and a KSS grid, metrics table.
+import type { ResultsView } from '../../../src/results/view-model.js';
+import { findRun } from '../../../src/results/view-model.js';
+import { comparisonRows, formatNumber } from '../../../src/charts/comparison-data.js';
+import { kssGrid } from '../../../src/charts/kss-grid-data.js';
+import { kssColour } from '../../../src/charts/palette.js';
+import { bandCompliance, lightAtEyeRows, recommendationBands } from '../../../src/charts/light-at-eye-data.js';
+import { formatClock, formatDayLabel } from '../../../src/charts/clock.js';
+import type { PersonaSummary } from '../headlines.js';
+import { PrintKssChart, PrintLightChart, PrintMelatoninChart, PrintPhaseChart } from './print-charts.js';
+import { Section } from './sections.js';
+
+const BAND_WORDS = { day: 'day (≥ 250 lx)', evening: 'evening (≤ 10 lx)', night: 'night (≤ 1 lx)' } as const;
+
+function ComplianceLine({ view, personaId, strategyId, day }: { view: ResultsView; personaId: string; strategyId: string; day: number }) {
+  const run = findRun(view, personaId, strategyId);
+  if (run === undefined) return null;
+  const compliance = bandCompliance(lightAtEyeRows(run.light, day, 10), recommendationBands(run.sleep, day));
+  return (
+    <p className="chart-note">
+      Time meeting the recommendation:{' '}
+      {compliance.map((c, i) => (
+        <span key={i}>
+          {i > 0 ? '; ' : ''}
+          {BAND_WORDS[c.band.kind]} {formatClock(c.band.from_h)}–{formatClock(c.band.to_h)} {Math.round(c.met * 100)} %
+        </span>
+      ))}
+      .
+    </p>
+  );
+}
+
+function KssGridTable({ view, personaId, strategyId }: { view: ResultsView; personaId: string; strategyId: string }) {
+  const run = findRun(view, personaId, strategyId);
+  if (run === undefined) return null;
+  const grid = kssGrid(run.kssHourly, view.days);
+  const name = view.strategies.find((s) => s.id === strategyId)?.name ?? strategyId;
+  return (
+    <figure className="chart keep">
+      <figcaption className="chart-title">Sleepiness by day and hour — {name}</figcaption>
+      <table className="kss-grid">
+        <thead>
+          <tr>
+            <th />
+            {Array.from({ length: 24 }, (_, h) => (
+              <th key={h}>{h % 3 === 0 ? String(h).padStart(2, '0') : ''}</th>
+            ))}
+          </tr>
+        </thead>
+        <tbody>
+          {grid.map((row, d) => (
+            <tr key={d}>
+              <th scope="row">{formatDayLabel(view.startDate, d)}</th>
+              {row.map((cell) => (
+                <td key={cell.hour} className={cell.sleepy ? 'kss-sleepy' : cell.kss === null ? 'kss-none' : undefined} style={cell.kss === null ? undefined : { background: kssColour(cell.kss) }} />
+              ))}
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      <p className="chart-note">Darker = sleepier (KSS 1 extremely alert … 9 very sleepy). Outlined: KSS ≥ 7. Grey: asleep.</p>
+    </figure>
+  );
+}
+
+function MetricsTable({ view, personaId }: { view: ResultsView; personaId: string }) {
+  const runs = view.runs.filter((r) => r.personaId === personaId);
+  const strategies = view.strategies.filter((s) => runs.some((r) => r.strategyId === s.id));
+  const rows = comparisonRows(runs, strategies, view.baselineId);
+  return (
+    <table className="data keep metrics">
+      <thead>
+        <tr>
+          <th>Metric</th>
+          {strategies.map((s) => (
+            <th key={s.id} className="num">
+              {s.name}
+            </th>
+          ))}
+        </tr>
+      </thead>
+      <tbody>
+        {rows.map((row) => (
+          <tr key={row.metricId}>
+            <td>
+              {row.label}
+              {row.unit === '' ? '' : ` (${row.unit})`}
+            </td>
+            {row.cells.map((c) => (
+              <td key={c.strategyId} className={`num verdict-${c.verdict}`}>
+                {formatNumber(c.value, row.decimals)}
+                {c.difference !== null && (
+                  <span className="diff">
+                    {' '}
+                    ({c.difference > 0 ? '+' : c.difference < 0 ? '−' : '±'}
+                    {formatNumber(Math.abs(c.difference), row.decimals)})
+                  </span>
+                )}
+              </td>
+            ))}
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}
+
+export function PersonaResults({ view, summary, day }: { view: ResultsView; summary: PersonaSummary; day: number }) {
+  const personaId = summary.persona.id;
+  const runs = view.runs.filter((r) => r.personaId === personaId);
+  const strategies = view.strategies.filter((s) => runs.some((r) => r.strategyId === s.id));
+  const dayLabel = formatDayLabel(view.startDate, day);
+  const baseline = findRun(view, personaId, view.baselineId);
+  const rec = summary.recommended;
+  const recRun = rec === null || rec === summary.baseline ? undefined : findRun(view, personaId, rec.strategy.id);
+  return (
+    <Section id={`results-${personaId}`} title={`Results: ${summary.persona.name}`}>
+      <h3>Light at the eye</h3>
+      {baseline !== undefined && (
+        <div className="keep">
+          <PrintLightChart run={baseline} day={day} title={`Melanopic EDI at the eye by source on ${dayLabel} — Baseline`} />
+          <ComplianceLine view={view} personaId={personaId} strategyId={baseline.strategyId} day={day} />
+        </div>
+      )}
+      {recRun !== undefined && rec !== null && (
+        <div className="keep">
+          <PrintLightChart run={recRun} day={day} title={`Melanopic EDI at the eye by source on ${dayLabel} — ${rec.strategy.name}`} />
+          <ComplianceLine view={view} personaId={personaId} strategyId={recRun.strategyId} day={day} />
+        </div>
+      )}
+      <h3>Body clock</h3>
+      <div className="keep">
+        <PrintPhaseChart view={view} runs={runs} strategies={strategies} />
+      </div>
+      <h3>Melatonin</h3>
+      <div className="keep">
+        <PrintMelatoninChart runs={runs} strategies={strategies} day={day} dayLabel={dayLabel} />
+      </div>
+      <h3>Sleepiness</h3>
+      <div className="keep">
+        <PrintKssChart runs={runs} strategies={strategies} day={day} dayLabel={dayLabel} />
+      </div>
+      <KssGridTable view={view} personaId={personaId} strategyId={rec?.strategy.id ?? view.baselineId} />
+      <h3>Metrics</h3>
+      <p className="small muted">Values per strategy; in brackets the difference from the baseline.</p>
+      <MetricsTable view={view} personaId={personaId} />
+    </Section>
+  );
+}

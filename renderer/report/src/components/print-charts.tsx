@@ -1,0 +1,114 @@
+// Charts sized for a printed page: fixed pixel sizes (no resize observer), no animation, no
+// tooltips; drawn as SVG so the PDF keeps them as vectors. Data come from the app's chart-data
+// modules (renderer/src/charts/*), colours from its palette.
+import { Area, CartesianGrid, ComposedChart, Legend, Line, LineChart, ReferenceArea, ReferenceLine, XAxis, YAxis } from 'recharts';
+import type { NamedItem, ResultsView, RunView } from '../../../src/results/view-model.js';
+import { lightAtEyeRows, recommendationBands, RECOMMENDED_DAY_MIN_LX, RECOMMENDED_EVENING_MAX_LX, RECOMMENDED_NIGHT_MAX_LX } from '../../../src/charts/light-at-eye-data.js';
+import { phaseByDayRows, phaseKey } from '../../../src/charts/phase-data.js';
+import { melatoninKey, melatoninNightRows } from '../../../src/charts/melatonin-data.js';
+import { kssDayRows, KSS_SLEEPY_THRESHOLD } from '../../../src/charts/kss-grid-data.js';
+import { BAND_COLOURS, OKABE_ITO, SOURCE_KIND_COLOURS, seriesColour, seriesDash } from '../../../src/charts/palette.js';
+import { clockAxis, formatClock, formatDayLabel } from '../../../src/charts/clock.js';
+
+export const CHART_WIDTH_PX = 660;
+const AXIS_INK = '#4a5563';
+const GRID = '#e3e6ea';
+const TICK = { fontSize: 10, fill: AXIS_INK };
+const LEGEND_STYLE = { fontSize: 10, lineHeight: '14px' };
+
+export function PrintLightChart({ run, day, title }: { run: RunView; day: number; title: string }) {
+  const rows = lightAtEyeRows(run.light, day, 10);
+  const bands = recommendationBands(run.sleep, day);
+  return (
+    <figure className="chart">
+      <figcaption className="chart-title">{title}</figcaption>
+      <ComposedChart width={CHART_WIDTH_PX} height={210} data={rows} margin={{ top: 8, right: 16, bottom: 0, left: 4 }}>
+        <CartesianGrid stroke={GRID} vertical={false} />
+        {bands.map((b, i) => (
+          <ReferenceArea key={`a${i}`} x1={b.from_h} x2={b.to_h} fill={BAND_COLOURS[b.kind]} fillOpacity={b.kind === 'night' ? 0.07 : 0.06} ifOverflow="hidden" />
+        ))}
+        <XAxis dataKey="clock_h" type="number" domain={[0, 24]} ticks={[0, 3, 6, 9, 12, 15, 18, 21, 24]} tick={TICK} tickFormatter={(h: number) => formatClock(h === 24 ? 0 : h)} />
+        <YAxis tick={TICK} width={52} domain={[0, 'auto']} label={{ value: 'melanopic EDI (lx)', angle: -90, position: 'insideLeft', style: { textAnchor: 'middle', fill: AXIS_INK, fontSize: 10 } }} />
+        <Legend wrapperStyle={LEGEND_STYLE} iconSize={9} />
+        {run.light.sources.map((s) => (
+          <Area key={s.id} type="stepAfter" dataKey={s.id} name={s.label} stackId="light" stroke={SOURCE_KIND_COLOURS[s.kind]} fill={SOURCE_KIND_COLOURS[s.kind]} fillOpacity={0.55} isAnimationActive={false} dot={false} />
+        ))}
+        {bands.map((b, i) => (
+          <ReferenceLine key={`l${i}`} segment={[{ x: b.from_h, y: b.limit_lx }, { x: b.to_h, y: b.limit_lx }]} stroke={BAND_COLOURS[b.kind]} strokeWidth={1.5} strokeDasharray={b.rule === 'at least' ? '6 3' : '2 3'} ifOverflow="hidden" />
+        ))}
+      </ComposedChart>
+      <p className="chart-note">
+        Shaded: day, evening (3 h before sleep) and night. Dashed lines: recommended melanopic EDI at the eye — at least {RECOMMENDED_DAY_MIN_LX} lx by day, at most {RECOMMENDED_EVENING_MAX_LX} lx in the evening, at most {RECOMMENDED_NIGHT_MAX_LX} lx during sleep (Brown et al. 2022).
+      </p>
+    </figure>
+  );
+}
+
+export function PrintPhaseChart({ view, runs, strategies }: { view: ResultsView; runs: readonly RunView[]; strategies: readonly NamedItem[] }) {
+  const rows = phaseByDayRows(runs, strategies, view.days, 'dlmo');
+  const axis = clockAxis(rows.flatMap((r) => strategies.map((s) => r[phaseKey(s.id, 'dlmo')])));
+  const stride = view.days > 10 ? 2 : 1;
+  return (
+    <figure className="chart">
+      <figcaption className="chart-title">Body clock: dim-light melatonin onset (DLMO) by day</figcaption>
+      <LineChart width={CHART_WIDTH_PX} height={190} data={rows} margin={{ top: 8, right: 16, bottom: 0, left: 4 }}>
+        <CartesianGrid stroke={GRID} />
+        <XAxis dataKey="day" tick={TICK} interval={stride - 1} tickFormatter={(d: number) => formatDayLabel(view.startDate, d)} />
+        <YAxis reversed tick={TICK} width={52} domain={axis.domain} ticks={axis.ticks} tickFormatter={(h: number) => formatClock(h)} label={{ value: 'clock time (earlier ↑)', angle: -90, position: 'insideLeft', style: { textAnchor: 'middle', fill: AXIS_INK, fontSize: 10 } }} />
+        <Legend wrapperStyle={LEGEND_STYLE} iconSize={9} />
+        {strategies.map((s, i) => (
+          <Line key={s.id} dataKey={phaseKey(s.id, 'dlmo')} name={s.name} stroke={seriesColour(i)} strokeDasharray={seriesDash(i)} strokeWidth={1.8} dot={{ r: 2 }} connectNulls isAnimationActive={false} />
+        ))}
+      </LineChart>
+    </figure>
+  );
+}
+
+export function PrintMelatoninChart({ runs, strategies, day, dayLabel }: { runs: readonly RunView[]; strategies: readonly NamedItem[]; day: number; dayLabel: string }) {
+  const rows = melatoninNightRows(runs, strategies, day, 15);
+  const unit = runs[0]?.melatonin.unit ?? '';
+  return (
+    <figure className="chart">
+      <figcaption className="chart-title">Melatonin in the night after {dayLabel}</figcaption>
+      <LineChart width={CHART_WIDTH_PX} height={190} data={rows} margin={{ top: 8, right: 16, bottom: 0, left: 4 }}>
+        <CartesianGrid stroke={GRID} vertical={false} />
+        <XAxis dataKey="hour" type="number" domain={[18, 36]} ticks={[18, 21, 24, 27, 30, 33, 36]} tick={TICK} tickFormatter={(h: number) => formatClock(h)} />
+        <YAxis tick={TICK} width={52} label={{ value: `melatonin (${unit})`, angle: -90, position: 'insideLeft', style: { textAnchor: 'middle', fill: AXIS_INK, fontSize: 10 } }} />
+        <Legend wrapperStyle={LEGEND_STYLE} iconSize={9} />
+        {strategies.map((s, i) => (
+          <Line key={`${s.id}-dark`} dataKey={melatoninKey(s.id, true)} name={`${s.name}, without light`} stroke={seriesColour(i)} strokeOpacity={0.45} strokeDasharray="4 3" dot={false} isAnimationActive={false} legendType="plainline" />
+        ))}
+        {strategies.map((s, i) => (
+          <Line key={s.id} dataKey={melatoninKey(s.id)} name={s.name} stroke={seriesColour(i)} strokeWidth={1.8} dot={false} isAnimationActive={false} />
+        ))}
+      </LineChart>
+      <p className="chart-note">Where a solid line runs below its dashed partner, light is suppressing melatonin.</p>
+    </figure>
+  );
+}
+
+export function PrintKssChart({ runs, strategies, day, dayLabel }: { runs: readonly RunView[]; strategies: readonly NamedItem[]; day: number; dayLabel: string }) {
+  const rows = Array.from({ length: 24 }, (_, hour) => {
+    const row: Record<string, number | null> = { hour };
+    for (const s of strategies) {
+      const run = runs.find((r) => r.strategyId === s.id);
+      row[s.id] = run === undefined ? null : (kssDayRows(run.kssHourly, day)[hour]?.kss ?? null);
+    }
+    return row;
+  });
+  return (
+    <figure className="chart">
+      <figcaption className="chart-title">Sleepiness (KSS) by hour on {dayLabel}</figcaption>
+      <LineChart width={CHART_WIDTH_PX} height={170} data={rows} margin={{ top: 8, right: 40, bottom: 0, left: 4 }}>
+        <CartesianGrid stroke={GRID} vertical={false} />
+        <XAxis dataKey="hour" type="number" domain={[0, 23]} ticks={[0, 3, 6, 9, 12, 15, 18, 21]} tick={TICK} tickFormatter={(h: number) => formatClock(h)} />
+        <YAxis tick={TICK} width={52} domain={[1, 9]} ticks={[1, 3, 5, 7, 9]} label={{ value: 'KSS', angle: -90, position: 'insideLeft', style: { textAnchor: 'middle', fill: AXIS_INK, fontSize: 10 } }} />
+        <ReferenceLine y={KSS_SLEEPY_THRESHOLD} stroke={OKABE_ITO.vermillion} strokeDasharray="6 3" label={{ value: 'KSS 7', position: 'right', fill: OKABE_ITO.vermillion, fontSize: 10 }} />
+        <Legend wrapperStyle={LEGEND_STYLE} iconSize={9} />
+        {strategies.map((s, i) => (
+          <Line key={s.id} dataKey={s.id} name={s.name} stroke={seriesColour(i)} strokeDasharray={seriesDash(i)} strokeWidth={1.8} dot={{ r: 1.5 }} isAnimationActive={false} />
+        ))}
+      </LineChart>
+    </figure>
+  );
+}

@@ -1,0 +1,284 @@
+// The briefing's sections, in print order. Each section starts on a new page where it reads
+// better; figures and tables never break across pages (print.css).
+import type { ReactNode } from 'react';
+import type { BriefingDocument } from '../briefing-document.js';
+import type { ResultsView } from '../../../src/results/view-model.js';
+import type { PersonaSummary, StrategyHeadline } from '../headlines.js';
+import type { ScenarioFacts } from '../scenario-facts.js';
+import type { ValidationRecordSummary } from '../validation-summary.js';
+import { RESULTS_CAUTIONS } from '../../../src/results/cautions.js';
+import { formatNumber } from '../../../src/charts/comparison-data.js';
+import { MODELS, NOT_MODELLED, UNIT_NOTES } from '../methods-text.js';
+import { TimelineDrawing } from './TimelineDrawing.js';
+
+export function Section({ id, title, children, newPage = true }: { id: string; title: string; children: ReactNode; newPage?: boolean }) {
+  return (
+    <section id={id} className={newPage ? 'section new-page' : 'section'}>
+      <h2>{title}</h2>
+      {children}
+    </section>
+  );
+}
+
+export function CautionsBox({ title = 'Read with care' }: { title?: string }) {
+  return (
+    <aside className="cautions keep">
+      <strong>{title}</strong>
+      <ul>
+        {RESULTS_CAUTIONS.map((c) => (
+          <li key={c}>{c}</li>
+        ))}
+      </ul>
+    </aside>
+  );
+}
+
+function longDate(iso: string): string {
+  const [y, m, d] = iso.split('-').map(Number);
+  const month = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'][(m ?? 1) - 1];
+  return `${d ?? 1} ${month} ${y ?? ''}`;
+}
+
+export function Cover({ doc, facts }: { doc: BriefingDocument; facts: ScenarioFacts }) {
+  return (
+    <section className="cover">
+      <div className="cover-band" />
+      <p className="cover-kicker">Lighting and body-clock briefing</p>
+      <h1>{facts.name}</h1>
+      <p className="cover-client">{doc.client ?? facts.siteName}</p>
+      {facts.description !== null && <p className="cover-description">{facts.description}</p>}
+      <dl className="cover-facts">
+        <dt>Date</dt>
+        <dd>{longDate(doc.generatedOn)}</dd>
+        <dt>Site</dt>
+        <dd>{facts.siteName}</dd>
+        <dt>Period</dt>
+        <dd>{facts.period}</dd>
+        <dt>Software</dt>
+        <dd>Zeitlight {doc.zeitlightVersion}</dd>
+        <dt>Scenario format</dt>
+        <dd>zeitlight-scenario version {facts.formatVersion}</dd>
+      </dl>
+      {doc.synthetic === true && <p className="banner">Synthetic data for a layout check — not a simulation result.</p>}
+      <p className="cover-footnote">Model estimates for planning and comparing lighting options — not diagnosis or treatment.</p>
+    </section>
+  );
+}
+
+const signed = (v: number | null, decimals: number, unit: string) => (v === null ? '—' : `${v > 0 ? '+' : v < 0 ? '−' : ''}${formatNumber(Math.abs(v), decimals)} ${unit}`);
+const percent = (v: number | null) => (v === null ? '—' : `${formatNumber(v, 0)} %`);
+
+function HeadlineTable({ summary }: { summary: PersonaSummary }) {
+  const isRec = (h: StrategyHeadline) => h === summary.recommended;
+  return (
+    <table className="data keep">
+      <thead>
+        <tr>
+          <th>Strategy</th>
+          <th className="num">Phase shift vs baseline (DLMO, + = earlier)</th>
+          <th className="num">Evening melatonin suppression</th>
+          <th className="num">{summary.basis === 'work' ? 'Work hours' : 'Waking hours'} at KSS ≥ 7</th>
+        </tr>
+      </thead>
+      <tbody>
+        {summary.all.map((h) => (
+          <tr key={h.strategy.id} className={isRec(h) ? 'recommended' : undefined}>
+            <td>
+              {h.strategy.name}
+              {isRec(h) && <span className="tag">recommended</span>}
+            </td>
+            <td className="num">{h === summary.baseline ? 'reference' : signed(h.phaseShift_h, 1, 'h')}</td>
+            <td className="num">{percent(h.suppression_pct)}</td>
+            <td className="num">{percent(h.sleepyShare_pct)}</td>
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}
+
+export function Summary({ summaries }: { summaries: readonly PersonaSummary[] }) {
+  return (
+    <Section id="summary" title="Summary">
+      <CautionsBox />
+      {summaries.map((s) => (
+        <div key={s.persona.id} className="persona-summary keep">
+          <h3>{s.persona.name}</h3>
+          <p className="recommendation">{s.sentences.recommendation}</p>
+          <ul className="headlines">
+            <li>{s.sentences.phase}</li>
+            <li>{s.sentences.suppression}</li>
+            <li>{s.sentences.sleepiness}</li>
+          </ul>
+          <HeadlineTable summary={s} />
+        </div>
+      ))}
+      <p className="small muted">
+        How the recommendation is chosen: the strategy with the lowest share of sleepy {summaries.some((s) => s.basis === 'work') ? 'work' : 'waking'} hours (KSS ≥ 7); within half a percentage point, the one with less evening melatonin suppression. A strategy is recommended over the baseline only when it is better on one of these two and not worse on the other. Phase shifts are reported, not scored: whether earlier or later is better depends on the person’s hours.
+      </p>
+    </Section>
+  );
+}
+
+export function Modelled({ facts }: { facts: ScenarioFacts }) {
+  return (
+    <Section id="modelled" title="What was modelled">
+      <h3>Site and weather</h3>
+      <p>{facts.siteLine}</p>
+      <p>
+        {facts.weatherLine} Simulated period: {facts.period}.
+      </p>
+      <h3>Places</h3>
+      <table className="data keep">
+        <tbody>
+          {facts.places.map((p) => (
+            <tr key={p.name}>
+              <th scope="row">{p.name}</th>
+              <td>{p.line}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      <h3>People and their routines</h3>
+      {facts.personas.map((p) => (
+        <div key={p.id} className="keep persona-facts">
+          <h4>{p.name}</h4>
+          <p className="small">{p.details}</p>
+          <TimelineDrawing rows={p.rows} />
+        </div>
+      ))}
+      <h3>Strategies</h3>
+      <p className="small muted">Each strategy is a set of changes applied on top of the baseline (the scenario as entered).</p>
+      {facts.strategies.length === 0 && <p>No strategies: only the baseline was modelled.</p>}
+      {facts.strategies.map((s) => (
+        <div key={s.id} className="keep strategy-facts">
+          <h4>{s.name}</h4>
+          {s.description !== null && <p className="small">{s.description}</p>}
+          <p className="small muted">For: {s.appliesTo}</p>
+          <ul className="small">
+            {s.changes.map((c) => (
+              <li key={c}>{c}</li>
+            ))}
+          </ul>
+        </div>
+      ))}
+    </Section>
+  );
+}
+
+export function CohortSection({ doc, view }: { doc: BriefingDocument; view: ResultsView }) {
+  const cohort = doc.cohort;
+  if (cohort === undefined || cohort.ranges.length === 0) return null;
+  const name = (list: readonly { id: string; name: string }[], id: string) => list.find((x) => x.id === id)?.name ?? id;
+  return (
+    <Section id="cohort" title="Cohort: ranges across virtual occupants">
+      <p>
+        {cohort.occupants} virtual occupants were simulated per person and strategy, each with their own intrinsic period, light sensitivity, age and habitual sleep timing drawn around the persona{cohort.seed === null ? '' : ` (seed ${cohort.seed})`}. The table gives the middle 90 % (5th to 95th percentile) and the median.
+      </p>
+      <table className="data keep">
+        <thead>
+          <tr>
+            <th>Person</th>
+            <th>Strategy</th>
+            <th>Metric</th>
+            <th className="num">5th pct.</th>
+            <th className="num">Median</th>
+            <th className="num">95th pct.</th>
+          </tr>
+        </thead>
+        <tbody>
+          {cohort.ranges.map((r, i) => (
+            <tr key={i}>
+              <td>{name(view.personas, r.personaId)}</td>
+              <td>{name(view.strategies, r.strategyId)}</td>
+              <td>{r.label}</td>
+              <td className="num">{formatNumber(r.p05, r.decimals)} {r.unit}</td>
+              <td className="num">{formatNumber(r.median, r.decimals)} {r.unit}</td>
+              <td className="num">{formatNumber(r.p95, r.decimals)} {r.unit}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </Section>
+  );
+}
+
+export function Methods({ records }: { records: readonly ValidationRecordSummary[] }) {
+  return (
+    <Section id="methods" title="Methods and assumptions">
+      <h3>Models</h3>
+      <table className="data keep small-table">
+        <thead>
+          <tr>
+            <th>What</th>
+            <th>Model</th>
+            <th>Reference</th>
+            <th>Native units</th>
+          </tr>
+        </thead>
+        <tbody>
+          {MODELS.map((m) => (
+            <tr key={m.what}>
+              <td>{m.what}</td>
+              <td>{m.model}</td>
+              <td>{m.reference}</td>
+              <td>{m.units}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      <h3>Units and conversions</h3>
+      <ul className="small keep">
+        {UNIT_NOTES.map((n) => (
+          <li key={n}>{n}</li>
+        ))}
+      </ul>
+      <h3>What the tool does not model</h3>
+      <ul className="small keep">
+        {NOT_MODELLED.map((n) => (
+          <li key={n}>{n}</li>
+        ))}
+      </ul>
+      <h3>Validation summary</h3>
+      <p className="small">
+        Every model is checked by the test suite against outside references (published standards, papers’ numbers, handbook formulas). {records.reduce((n, r) => n + r.checks, 0)} checks are recorded in {records.length} validation records; a few from each are quoted below as written in the record.
+      </p>
+      {records.map((r) => (
+        <div key={r.file} className="keep validation-record">
+          <h4>
+            {r.title} — {r.checks} checks
+          </h4>
+          <table className="data small-table">
+            <thead>
+              <tr>
+                <th>Check</th>
+                <th>Reference</th>
+                <th>Result</th>
+              </tr>
+            </thead>
+            <tbody>
+              {r.examples.map((e, i) => (
+                <tr key={i}>
+                  <td>{e.what}</td>
+                  <td>{e.source}</td>
+                  <td>{e.result}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      ))}
+    </Section>
+  );
+}
+
+export function ClosingCautions() {
+  return (
+    <Section id="cautions" title="Cautions" newPage={false}>
+      <CautionsBox title="Before acting on these results" />
+      <p className="small muted">
+        The numbers in this briefing are model estimates for a described scenario. They are meant for comparing lighting options with each other and with the baseline; they do not predict how any one person will respond.
+      </p>
+    </Section>
+  );
+}
