@@ -326,6 +326,9 @@ export function simulate(opts: SimulationOptions): SimulationRun {
         nextSample += sampleStep;
       }
       if (model.marker.kind === 'x-min') {
+        // sign changes of the interpolant's slope (one-sided differences inside the step).
+        // Not the right-hand side at interpolated states: under bright light n of Process L
+        // relaxes within minutes, its interpolant is poor and so would be dx/dt = f(x, xc, n).
         const delta = Math.min(1e-4, (tNew - tOld) / 4);
         const sa = Math.sign(dense(0, tOld + delta) - dense(0, tOld));
         const sb = Math.sign(dense(0, tNew) - dense(0, tNew - delta));
