@@ -1,0 +1,78 @@
+/**
+ * The body-clock models for one persona under one strategy (model/circadian): pacemaker
+ * (default Kronauer/Jewett x⁷ with Process L, "jfk99-x7"), St Hilaire 2007 melatonin and
+ * suppression, Postnova 2018 sleep pressure and KSS. Light input: melanopic EDI at the eye,
+ * merged into segments (light-segments.ts). Sleep: the timeline's prescribed sleep
+ * ("asleep" slices, eyes closed), or free (model-predicted) for personas with free sleep.
+ * Initial state: entrained to the persona's baseline day 0 (light and sleep repeated), shared
+ * by every strategy of that persona so that phase shifts compare like with like.
+ * Times in real hours since the run start (local midnight of day 0).
+ */
+import { DLMO_BEFORE_CBTMIN_H, hourlyKss, MIN_NIGHT_AUC } from '../../model/circadian/body-clock.js';
+import { dailySleepPattern, entrain } from '../../model/circadian/entrain.js';
+import type { LightSeries } from '../../model/circadian/light-series.js';
+import type { MelatoninNight } from '../../model/circadian/melatonin-pass.js';
+import type { Pacemaker } from '../../model/circadian/pacemaker.js';
+import { createPacemaker, DEFAULT_PACEMAKER_ID, type PacemakerId } from '../../model/circadian/registry.js';
+import { normalisedEpisodes, type SleepEpisode, type SleepSpec } from '../../model/circadian/sleep-input.js';
+import { simulate, type SimState, type SimulationRun } from '../../model/circadian/simulate.js';
+import type { Persona } from '../schema/scenario-types.js';
+import type { ExposureTimeline } from '../timeline/exposure-types.js';
+import { dyadicHours, mergedLightSeries } from './light-segments.js';
+
+export interface BodyClockOutcome {
+  readonly cbtmin_h: number[];
+  readonly dlmo_h: number[];
+  readonly nights: MelatoninNight[];
+  /** Acute suppression per night (%), null where the dim-light reference is ~0. */
+  readonly suppression_pct: (number | null)[];
+  readonly sleepEpisodes: SleepEpisode[];
+  /** KSS samples (every 0.25 h; NaN asleep). */
+  readonly kssSamples: { readonly t_h: number[]; readonly kss: number[] };
+  /** Mean KSS per real hour of the run while awake; null asleep. */
+  readonly kssHourly: (number | null)[];
+  readonly segments: number;
+}
+
+/** Prescribed sleep episodes (h) of a timeline: its "asleep" slices, touching ones joined. */
+export function prescribedSleep(timeline: ExposureTimeline): SleepEpisode[] {
+  const eps = timeline.slices.filter((s) => s.sleep === 'asleep').map((s) => ({ start_h: dyadicHours(s.start_min), end_h: dyadicHours(s.end_min) }));
+  return eps.length === 0 ? [] : normalisedEpisodes(eps);
+}
+
+export function sleepSpecFor(persona: Persona, timeline: ExposureTimeline): SleepSpec {
+  if (persona.sleep.mode === 'free') return { mode: 'free' };
+  return { mode: 'prescribed', episodes: prescribedSleep(timeline) };
+}
+
+export function pacemakerFor(persona: Persona, modelId: PacemakerId = DEFAULT_PACEMAKER_ID): Pacemaker {
+  return createPacemaker(modelId, { tau_h: persona.intrinsicPeriod_h, lightSensitivity: persona.lightSensitivity });
+}
+
+/** Entrained state from the first 24 h of light and sleep, repeated. */
+export function entrainedStart(model: Pacemaker, light: LightSeries, sleep: SleepSpec): SimState {
+  const daySleep: SleepSpec = sleep.mode === 'prescribed' ? { mode: 'prescribed', episodes: dailySleepPattern(sleep.episodes) } : sleep;
+  return entrain({ model, light, sleep: daySleep }).state;
+}
+
+export function runBodyClockFor(model: Pacemaker, mel_lx: Float64Array, sleep: SleepSpec, initial: SimState | undefined, total_min: number): { outcome: BodyClockOutcome; run: SimulationRun; light: LightSeries } {
+  const light = mergedLightSeries(mel_lx);
+  const init = initial ?? entrainedStart(model, light, sleep);
+  const end_h = total_min / 60;
+  const run = simulate({ model, light, sleep, initial: init, end_h });
+  const hours = Math.ceil(end_h - 1e-9);
+  return {
+    outcome: {
+      cbtmin_h: run.cbtmin_h,
+      dlmo_h: run.cbtmin_h.map((t) => t - DLMO_BEFORE_CBTMIN_H),
+      nights: run.nights,
+      suppression_pct: run.nights.map((nt) => (nt.dimAuc_pmol_h_L >= MIN_NIGHT_AUC && Number.isFinite(nt.acuteSuppression_pct) ? nt.acuteSuppression_pct : null)),
+      sleepEpisodes: run.sleepEpisodes,
+      kssSamples: { t_h: run.samples.t_h, kss: run.samples.kss },
+      kssHourly: hourlyKss(run, hours),
+      segments: light.start_h.length,
+    },
+    run,
+    light,
+  };
+}

@@ -1,0 +1,259 @@
+/**
+ * Light at the eye, minute by minute, for one persona under one strategy variant, kept apart
+ * per source (methods: docs/methods/pipeline.md §2):
+ *   daylight  through room windows (model/eye evaluateEyeLight, windows only) or vehicle windows
+ *   electric  room luminaires (scheduled output × stated eye illuminance), vehicle cabin light
+ *   screen    the screen in use (model/eye screenEyeIlluminance_lx of its luminance and size)
+ *   outdoor   daylight outdoors (model/daylight outdoorEyeSeries) and street lighting after dark
+ *   measured  a light log replacing the model where the timeline says so
+ * Photopic lux and melanopic EDI (lx). Melanopic EDI = lux × melanopic DER of the source
+ * spectrum × lens-age factor (CIE S 026 age correction relative to 32 years, applied per source
+ * through its spectrum) × eyewear melanopic transmittance; photopic lux × eyewear photopic
+ * transmittance.
+ */
+import { evaluateEyeLight, PLACE_ELSEWHERE, PLACE_ROOM, prepareRoom, screenEyeIlluminance_lx, type OutdoorConditions, type PreparedRoom } from '../../model/eye/index.js';
+import type { MinuteLightSeries } from '../lightlog/log-to-minutes.js';
+
+import type { Persona, Place, Room, Scenario, Screen } from '../schema/scenario-types.js';
+import { clockWindowHolds, exposureContext } from '../timeline/exposure-context.js';
+import type { ExposureSlice, ExposureTimeline } from '../timeline/exposure-types.js';
+import { sliceIndexPerMinute } from '../timeline/timeline-sampling.js';
+import type { LocalClock } from './local-clock.js';
+import { luminaireWeek } from './luminaire-levels.js';
+import type { OutdoorLight } from './outdoor-light.js';
+import { defaultGazeAzimuth_deg, roomScene, type NightBlinds } from './room-scene.js';
+import { daylightResponse, electricResponse, screenResponse } from './spectra.js';
+
+export const LIGHT_SOURCES = ['daylight', 'electric', 'screen', 'outdoor', 'measured'] as const;
+export type LightSource = (typeof LIGHT_SOURCES)[number];
+
+export interface EyeSeries {
+  readonly total_min: number;
+  readonly photopic_lx: Float64Array;
+  readonly mel_edi_lx: Float64Array;
+  readonly melBySource: Readonly<Record<LightSource, Float64Array>>;
+}
+
+/** Share of the open-field outdoor eye illuminance under partial and full shade (assumed planning values, docs/methods/pipeline.md). */
+export const OUTDOOR_SHADE_FACTOR = { open: 1, partial: 0.5, full: 0.2 } as const;
+/** Share of the outdoor eye illuminance reaching a passenger's eye before the window transmittance (roof and body hide part of sky and ground; assumed). */
+export const VEHICLE_VIEW_FACTOR = 0.6;
+/** Street and cabin lighting are on while the sun is below this elevation (deg; civil-twilight start, common practice). */
+export const ARTIFICIAL_OUTDOOR_BELOW_DEG = -0.833;
+/** CCT of street and cabin lighting (K; common LED practice). */
+export const STREET_LIGHT_CCT_K = 4000;
+
+/** Caches shared by the timelines of one run (and prepared rooms across runs). */
+export interface EyeCaches {
+  readonly daylight: Map<string, { photopic: Float64Array; mel: Float64Array }>;
+}
+
+const preparedRooms = new Map<string, PreparedRoom>();
+function prepared(key: string, build: () => PreparedRoom): PreparedRoom {
+  let p = preparedRooms.get(key);
+  if (p === undefined) {
+    p = build();
+    if (preparedRooms.size > 64) preparedRooms.clear();
+    preparedRooms.set(key, p);
+  }
+  return p;
+}
+
+function subConditions(c: OutdoorConditions, a: number, b: number): OutdoorConditions {
+  const s = <T extends Float64Array | Uint8Array>(x: T | undefined): T | undefined => (x === undefined ? undefined : (x.subarray(a, b) as T));
+  return {
+    sunZenith_deg: c.sunZenith_deg.subarray(a, b),
+    sunAzimuth_deg: c.sunAzimuth_deg.subarray(a, b),
+    directNormal_lx: c.directNormal_lx.subarray(a, b),
+    diffuseHorizontal_lx: c.diffuseHorizontal_lx.subarray(a, b),
+    month: c.month.subarray(a, b),
+    ...(c.directNormal_W_m2 !== undefined ? { directNormal_W_m2: s(c.directNormal_W_m2) as Float64Array } : {}),
+    ...(c.daylightCct_K !== undefined ? { daylightCct_K: s(c.daylightCct_K) as Float64Array } : {}),
+    ...(c.sunCct_K !== undefined ? { sunCct_K: s(c.sunCct_K) as Float64Array } : {}),
+    ...(c.perezEpsilon !== undefined ? { perezEpsilon: s(c.perezEpsilon) as Float64Array } : {}),
+    ...(c.snowOnGround !== undefined ? { snowOnGround: s(c.snowOnGround) as Uint8Array } : {}),
+  };
+}
+
+/** Daylight at the eye in one room with one gaze for the minutes marked in `occupied` (reference observer, no eyewear). */
+function roomDaylight(room: Room, gaze_deg: number, occupied: Uint8Array, scenario: Scenario, outdoor: OutdoorLight, clock: LocalClock, night: NightBlinds, caches: EyeCaches): { photopic: Float64Array; mel: Float64Array } {
+  const arrivalMatters = room.blinds.rule === 'manual-sun';
+  const sceneKey = JSON.stringify([room.width_m, room.depth_m, room.height_m, room.reflectances, room.windows, room.blinds, room.viewingPosition ?? null, Math.round(gaze_deg), scenario.site.ground]);
+  let occKey = '';
+  if (arrivalMatters) {
+    const edges: number[] = [];
+    for (let m = 0; m < occupied.length; m++) if ((occupied[m] ?? 0) !== (m === 0 ? 0 : (occupied[m - 1] ?? 0))) edges.push(m);
+    occKey = edges.join(',');
+  }
+  const key = `${sceneKey}|${occKey}`;
+  const hit = caches.daylight.get(key);
+  if (hit !== undefined) return hit;
+  const n = clock.total_min;
+  const prep = prepared(sceneKey, () => prepareRoom(roomScene(room, gaze_deg, night, { reflectance: scenario.site.ground.reflectance, snowReflectance: scenario.site.ground.snow.reflectance })));
+  const photopic = new Float64Array(n);
+  const mel = new Float64Array(n);
+  const place = new Uint8Array(n);
+  for (let m = 0; m < n; m++) place[m] = arrivalMatters ? ((occupied[m] ?? 0) === 1 ? PLACE_ROOM : PLACE_ELSEWHERE) : PLACE_ROOM;
+  for (const ch of clock.chunks) {
+    const cols = evaluateEyeLight(prep, subConditions(outdoor.conditions, ch.start, ch.end), { startMinuteOfDay: clock.minuteOfDay[ch.start] ?? 0, place: place.subarray(ch.start, ch.end) });
+    photopic.set(cols.bySource.daylight.photopic_lx, ch.start);
+    mel.set(cols.bySource.daylight.mel_edi_lx, ch.start);
+  }
+  const out = { photopic, mel };
+  caches.daylight.set(key, out);
+  return out;
+}
+
+const screenLux = new WeakMap<Screen, Map<number, number>>();
+function screenEye_lx(s: Screen, brightness: number): number {
+  let m = screenLux.get(s);
+  if (m === undefined) {
+    m = new Map();
+    screenLux.set(s, m);
+  }
+  let v = m.get(brightness);
+  if (v === undefined) {
+    v = screenEyeIlluminance_lx(s.luminance_cd_m2 * brightness, s.width_m, s.height_m, s.distance_m);
+    m.set(brightness, v);
+  }
+  return v;
+}
+
+export interface EyeSeriesInput {
+  readonly variant: Scenario;
+  readonly persona: Persona;
+  readonly timeline: ExposureTimeline;
+  readonly clock: LocalClock;
+  readonly outdoor: OutdoorLight;
+  readonly night: NightBlinds;
+  readonly logs: ReadonlyMap<string, MinuteLightSeries>;
+  readonly caches: EyeCaches;
+}
+
+export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
+  const { variant, persona, timeline, clock, outdoor } = inp;
+  const n = timeline.total_min;
+  const age = persona.age_y;
+  const melBySource = { daylight: new Float64Array(n), electric: new Float64Array(n), screen: new Float64Array(n), outdoor: new Float64Array(n), measured: new Float64Array(n) };
+  const photopic = new Float64Array(n);
+  const sliceOf = sliceIndexPerMinute(timeline);
+  const places = new Map<string, Place>(variant.places.map((p) => [p.id, p]));
+  const slices = timeline.slices;
+  const skyCct = outdoor.series.skyCct_K;
+  const sunElevation = outdoor.series.sun.elevation_deg;
+
+  // Daylight in rooms: one evaluation per room and gaze direction.
+  const groups = new Map<string, { room: Room; gaze: number; occupied: Uint8Array }>();
+  slices.forEach((s) => {
+    const p = places.get(s.placeId);
+    if (p === undefined || p.kind !== 'room' || p.windows.length === 0) return;
+    const gaze = s.gazeAzimuth_deg ?? defaultGazeAzimuth_deg(p, s.gaze);
+    const key = `${p.id}|${Math.round(gaze)}`;
+    let g = groups.get(key);
+    if (g === undefined) {
+      g = { room: p, gaze, occupied: new Uint8Array(n) };
+      groups.set(key, g);
+    }
+    g.occupied.fill(1, s.start_min, s.end_min);
+  });
+  const roomAt = new Int16Array(n).fill(-1);
+  const roomDay: { photopic: Float64Array; mel: Float64Array }[] = [];
+  for (const g of groups.values()) {
+    const k = roomDay.length;
+    roomDay.push(roomDaylight(g.room, g.gaze, g.occupied, variant, outdoor, clock, inp.night, inp.caches));
+    for (let m = 0; m < n; m++) if (g.occupied[m] === 1) roomAt[m] = k;
+  }
+
+  const streetResp = electricResponse({ kind: 'cct', cct_K: STREET_LIGHT_CCT_K }, undefined, age);
+  let contextSlice: ExposureSlice | undefined;
+  let context: ReturnType<typeof exposureContext> | undefined;
+  for (let m = 0; m < n; m++) {
+    const s = slices[sliceOf[m] ?? 0] as ExposureSlice;
+    const minuteOfDay = clock.minuteOfDay[m] ?? 0;
+    if (s !== contextSlice) {
+      contextSlice = s;
+      context = exposureContext(variant, persona, s, minuteOfDay);
+    }
+    const ctx = context as NonNullable<typeof context>;
+    const place = ctx.place;
+    const day = timeline.days[clock.dayIndex[m] ?? 0];
+    const weekday = day?.weekday ?? 'mon';
+    const dayResp = daylightResponse(skyCct[m] ?? 6504, age);
+    let pDay = 0;
+    let mDay = 0;
+    let pEl = 0;
+    let mEl = 0;
+    let pOut = 0;
+    let mOut = 0;
+    const dark = (sunElevation[m] ?? 0) < ARTIFICIAL_OUTDOOR_BELOW_DEG;
+    if (place.kind === 'room') {
+      const k = roomAt[m] ?? -1;
+      const rd = k >= 0 ? roomDay[k] : undefined;
+      if (rd !== undefined) {
+        pDay = rd.photopic[m] ?? 0;
+        mDay = (rd.mel[m] ?? 0) * dayResp.lensFactor;
+      }
+      for (const l of place.luminaires) {
+        const wk = luminaireWeek(l);
+        const level = wk.level[weekday][minuteOfDay] ?? 0;
+        if (level <= 0) continue;
+        const cct = wk.cct_K[weekday][minuteOfDay] ?? Number.NaN;
+        const r = electricResponse(l.spectrum, Number.isFinite(cct) ? cct : undefined, age);
+        const lux = level * l.eyeIlluminance_lx;
+        pEl += lux;
+        mEl += lux * r.melDer * r.lensFactor;
+      }
+    } else if (place.kind === 'vehicle') {
+      const lux = (outdoor.outdoorEye_lx[m] ?? 0) * VEHICLE_VIEW_FACTOR * place.windowTransmittance;
+      pDay = lux;
+      mDay = lux * dayResp.melDer * dayResp.lensFactor;
+      if (dark && place.interiorIlluminance_lx > 0) {
+        pEl = place.interiorIlluminance_lx;
+        mEl = pEl * streetResp.melDer * streetResp.lensFactor;
+      }
+    } else {
+      const lux = (outdoor.outdoorEye_lx[m] ?? 0) * OUTDOOR_SHADE_FACTOR[place.shade];
+      pOut = lux;
+      mOut = lux * dayResp.melDer * dayResp.lensFactor;
+      if (dark) {
+        pOut += place.streetLighting_lx;
+        mOut += place.streetLighting_lx * streetResp.melDer * streetResp.lensFactor;
+      }
+    }
+    let pScr = 0;
+    let mScr = 0;
+    if (ctx.screen !== null) {
+      const night = ctx.screen.nightMode !== undefined && clockWindowHolds(ctx.screen.nightMode.start, ctx.screen.nightMode.end, minuteOfDay);
+      const r = screenResponse(ctx.screen.spectrum, night ? ctx.screen.nightMode?.cct_K : undefined, age);
+      pScr = screenEye_lx(ctx.screen, s.screenBrightness);
+      mScr = pScr * r.melDer * r.lensFactor;
+    }
+    const pT = ctx.eyewear?.photopicTransmittance ?? 1;
+    const mT = ctx.eyewear?.melanopicTransmittance ?? 1;
+    let p = (pDay + pEl + pOut + pScr) * pT;
+    melBySource.daylight[m] = mDay * mT;
+    melBySource.electric[m] = mEl * mT;
+    melBySource.screen[m] = mScr * mT;
+    melBySource.outdoor[m] = mOut * mT;
+    if (s.measuredLogId !== null) {
+      const log = inp.logs.get(s.measuredLogId);
+      if (log !== undefined && log.measured[m] === 1) {
+        const modelMel = (mDay + mEl + mOut + mScr) * mT;
+        const ratio = p > 0 ? modelMel / p : 1;
+        const lux = log.photopic_lx[m] ?? Number.NaN;
+        const melLog = log.melanopicEdi_lx[m] ?? Number.NaN;
+        const mel = Number.isFinite(melLog) ? melLog : Number.isFinite(lux) ? lux * ratio : 0;
+        p = Number.isFinite(lux) ? lux : ratio > 0 ? mel / ratio : mel;
+        melBySource.daylight[m] = 0;
+        melBySource.electric[m] = 0;
+        melBySource.screen[m] = 0;
+        melBySource.outdoor[m] = 0;
+        melBySource.measured[m] = Math.max(0, mel);
+      }
+    }
+    photopic[m] = p;
+  }
+  const total = new Float64Array(n);
+  for (let m = 0; m < n; m++) total[m] = (melBySource.daylight[m] ?? 0) + (melBySource.electric[m] ?? 0) + (melBySource.screen[m] ?? 0) + (melBySource.outdoor[m] ?? 0) + (melBySource.measured[m] ?? 0);
+  return { total_min: n, photopic_lx: photopic, mel_edi_lx: total, melBySource };
+}

@@ -1,0 +1,8 @@
+/** The run pipeline's public surface (pure; runs in the CLI, the app's main process or a Web Worker). */
+export { runScenario, PIPELINE_VERSION, RUN_CAUTION, type RunInput, type RunOutput, type TimelineLight } from './run-scenario.js';
+export { RESULTS_FORMAT, RESULTS_FORMAT_VERSION, type RunResults, type PersonaResult, type StrategyResult, type DayMetrics, type StrategySummary, type Headline, type Recommendation, type EventTime, type SourceMap } from './results-types.js';
+export { RunInputError } from './run-input-error.js';
+export { LIGHT_SOURCES, type LightSource, type EyeSeries } from './eye-series.js';
+export { exposureCsv, summaryCsv, EXPOSURE_STEP_MIN } from './results-csv.js';
+export { RECOMMENDATION_RULE } from './recommend.js';
+export type { WeatherText } from './outdoor-light.js';

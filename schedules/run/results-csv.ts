@@ -1,0 +1,70 @@
+/**
+ * CSV views of a run (pure text, so the app can export the same files):
+ *  exposure.csv — light at the eye every EXPOSURE_STEP_MIN real minutes per persona × strategy:
+ *    interval start in UTC and local time (with offset), place, activity, asleep, photopic lux
+ *    and melanopic EDI in total and per source (means over the interval). Rows follow real time,
+ *    so a clock change shows as a local-time jump with no lost or repeated interval.
+ *  summary.csv — one row per persona × strategy with the summary metrics.
+ */
+import Papa from 'papaparse';
+import { LIGHT_SOURCES } from './eye-series.js';
+import type { RunResults } from './results-types.js';
+import type { TimelineLight } from './run-scenario.js';
+import { localIsoAt, type LocalClock } from './local-clock.js';
+
+export const EXPOSURE_STEP_MIN = 10;
+
+const r2 = (v: number) => Math.round(v * 100) / 100;
+
+export function exposureCsv(light: readonly TimelineLight[], clock: LocalClock): string {
+  const header = ['persona_id', 'strategy_id', 'utc', 'local_time', 'day_index', 'place', 'activity', 'asleep', 'photopic_lx', 'mel_edi_lx', ...LIGHT_SOURCES.map((s) => `mel_${s}_lx`)];
+  const rows: (string | number)[][] = [];
+  for (const tl of light) {
+    const { timeline, eye } = tl;
+    let k = 0;
+    for (let a = 0; a < timeline.total_min; a += EXPOSURE_STEP_MIN) {
+      const b = Math.min(timeline.total_min, a + EXPOSURE_STEP_MIN);
+      while (k < timeline.slices.length - 1 && (timeline.slices[k]?.end_min ?? 0) <= a) k++;
+      const s = timeline.slices[k];
+      const meanOf = (arr: Float64Array) => {
+        let t = 0;
+        for (let m = a; m < b; m++) t += arr[m] ?? 0;
+        return r2(t / (b - a));
+      };
+      rows.push([
+        tl.personaId,
+        tl.strategyId,
+        new Date(timeline.runStartUtc_ms + a * 60_000).toISOString().slice(0, 16) + 'Z',
+        localIsoAt(timeline, clock, a),
+        clock.dayIndex[a] ?? 0,
+        s?.placeId ?? '',
+        s?.activity ?? '',
+        s?.sleep === 'asleep' ? 1 : 0,
+        meanOf(eye.photopic_lx),
+        meanOf(eye.mel_edi_lx),
+        ...LIGHT_SOURCES.map((src) => meanOf(eye.melBySource[src])),
+      ]);
+    }
+  }
+  return Papa.unparse({ fields: header, data: rows }, { newline: '\n' }) + '\n';
+}
+
+export function summaryCsv(results: RunResults): string {
+  const header = [
+    'persona_id', 'strategy_id', 'strategy_name', 'recommended', 'mean_mel_dose_lx_h', 'mean_daytime_hours_ge_250_lx', 'mean_pre_sleep_mel_edi_lx',
+    'nights_pre_sleep_meeting_10_lx', 'nights_sleep_meeting_1_lx', 'nights_assessed', 'mean_phase_shift_h', 'mean_phase_angle_dlmo_to_sleep_h',
+    'mean_melatonin_suppression_pct', 'work_hours', 'work_hours_kss_ge_7_share', 'mean_sleep_duration_h',
+  ];
+  const rows: (string | number | null)[][] = [];
+  for (const p of results.personas) {
+    for (const s of p.strategies) {
+      const m = s.summary;
+      rows.push([
+        p.id, s.id, s.name, p.recommendation.strategy_id === s.id ? 1 : 0, m.mean_mel_dose_lx_h, m.mean_daytime_hours_ge_250_lx, m.mean_pre_sleep_mel_edi_lx,
+        m.nights_pre_sleep_meeting_10_lx, m.nights_sleep_meeting_1_lx, m.nights_assessed, m.mean_phase_shift_h, m.mean_phase_angle_dlmo_to_sleep_h,
+        m.mean_melatonin_suppression_pct, m.work_hours, m.work_hours_kss_ge_7_share, m.mean_sleep_duration_h,
+      ].map((v) => (v === null ? '' : v)));
+    }
+  }
+  return Papa.unparse({ fields: header, data: rows }, { newline: '\n' }) + '\n';
+}

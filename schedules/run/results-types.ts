@@ -1,0 +1,133 @@
+/**
+ * The results document of a run ("zeitlight-results", version 1). Field names are stable;
+ * docs/results-format.md describes every field. Times: `*_h` are real hours since the run
+ * start (local midnight of the first day); `*_local` are ISO 8601 local times with the UTC
+ * offset at that moment. Light: melanopic EDI (CIE S 026) and photopic illuminance at the eye, lx.
+ */
+export const RESULTS_FORMAT = 'zeitlight-results';
+export const RESULTS_FORMAT_VERSION = 1;
+
+export type SourceMap<T> = { daylight: T; electric: T; screen: T; outdoor: T; measured: T };
+
+export interface Headline {
+  /** "phase_shift_h" | "melatonin_suppression_pct" | "work_hours_kss_ge_7_share". */
+  readonly metric: 'phase_shift_h' | 'melatonin_suppression_pct' | 'work_hours_kss_ge_7_share';
+  readonly value: number | null;
+  readonly baseline: number | null;
+  readonly sentence: string;
+}
+
+export interface DayMetrics {
+  readonly index: number;
+  readonly date: string;
+  readonly mel_dose_lx_h: number;
+  readonly mel_dose_by_source_lx_h: SourceMap<number>;
+  readonly daytime_hours_ge_250_lx: number;
+  readonly awake_hours: number;
+  readonly pre_sleep_mean_mel_edi_lx: number | null;
+  readonly pre_sleep_meets_10_lx: boolean | null;
+  readonly sleep_mean_mel_edi_lx: number | null;
+  readonly sleep_meets_1_lx: boolean | null;
+  readonly cbtmin_h: number | null;
+  readonly cbtmin_local: string | null;
+  readonly dlmo_h: number | null;
+  readonly dlmo_local: string | null;
+  readonly phase_shift_h: number | null;
+  readonly phase_angle_dlmo_to_sleep_h: number | null;
+  readonly melatonin_suppression_pct: number | null;
+  readonly work_hours: number;
+  readonly work_hours_kss_ge_7: number;
+  readonly kss_mean_awake: number | null;
+  readonly sleep_onset_local: string | null;
+  readonly sleep_duration_h: number | null;
+}
+
+export interface StrategySummary {
+  readonly mean_mel_dose_lx_h: number;
+  readonly mean_daytime_hours_ge_250_lx: number;
+  readonly mean_pre_sleep_mel_edi_lx: number | null;
+  readonly nights_pre_sleep_meeting_10_lx: number;
+  readonly nights_sleep_meeting_1_lx: number;
+  readonly nights_assessed: number;
+  /** Mean CBTmin shift vs the baseline over the last 7 days (h; + later, − earlier). */
+  readonly mean_phase_shift_h: number | null;
+  readonly mean_phase_angle_dlmo_to_sleep_h: number | null;
+  readonly mean_melatonin_suppression_pct: number | null;
+  readonly work_hours: number;
+  readonly work_hours_kss_ge_7_share: number | null;
+  readonly mean_sleep_duration_h: number | null;
+}
+
+export interface EventTime {
+  readonly t_h: number;
+  readonly local: string;
+}
+
+export interface StrategyResult {
+  readonly id: string;
+  readonly name: string;
+  readonly is_baseline: boolean;
+  readonly changes: readonly string[];
+  readonly summary: StrategySummary;
+  readonly headlines: readonly Headline[];
+  readonly days: readonly DayMetrics[];
+  /** Hourly means over the run's real hours (see RunResults.hours). */
+  readonly hourly: {
+    readonly mel_edi_lx: SourceMap<number[]> & { total: number[] };
+    readonly photopic_lx: number[];
+    readonly kss: (number | null)[];
+  };
+  readonly cbtmin: readonly EventTime[];
+  readonly dlmo: readonly EventTime[];
+  readonly sleep_episodes: readonly { readonly start: EventTime; readonly end: EventTime; readonly duration_h: number }[];
+  readonly melatonin_nights: readonly { readonly onset: EventTime; readonly end_h: number; readonly suppression_pct: number | null }[];
+  readonly solver: { readonly light_segments: number; readonly rhs_evaluations: number };
+}
+
+export interface Recommendation {
+  readonly strategy_id: string;
+  readonly strategy_name: string;
+  readonly rule: string;
+  readonly reason: string;
+}
+
+export interface PersonaResult {
+  readonly id: string;
+  readonly name: string;
+  readonly age_y: number;
+  readonly sleep_mode: 'habitual' | 'free';
+  readonly strategies: readonly StrategyResult[];
+  readonly recommendation: Recommendation;
+}
+
+export interface RunResults {
+  readonly format: typeof RESULTS_FORMAT;
+  readonly version: typeof RESULTS_FORMAT_VERSION;
+  readonly generator: { readonly name: 'zeitlight'; readonly pipeline: string };
+  readonly caution: string;
+  readonly scenario: {
+    readonly name: string;
+    readonly start_date: string;
+    readonly days: number;
+    readonly time_zone: string;
+    readonly site_name: string | null;
+    readonly latitude_deg: number;
+    readonly longitude_deg: number;
+    readonly weather: 'sky-model' | 'weather-file';
+    readonly sky_by_day: readonly (string | null)[];
+  };
+  readonly models: { readonly pacemaker: string; readonly melatonin: string; readonly sleepiness: string; readonly light_input: string };
+  readonly thresholds: {
+    readonly daytime_mel_edi_lx: number;
+    readonly pre_sleep_mel_edi_lx: number;
+    readonly pre_sleep_window_h: number;
+    readonly sleep_mel_edi_lx: number;
+    readonly kss_sleepy: number;
+    readonly source: string;
+  };
+  readonly days: readonly { readonly index: number; readonly date: string; readonly weekday: string; readonly start_local: string; readonly length_h: number }[];
+  /** Local start time of each real hour of the run (the hourly arrays' index). */
+  readonly hours: { readonly start_local: readonly string[] };
+  readonly personas: readonly PersonaResult[];
+  readonly warnings: readonly string[];
+}
