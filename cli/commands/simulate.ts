@@ -3,7 +3,7 @@
  * [--sleep <csv>] [--alarm <hour>] [--json]` — body clock, melatonin and sleepiness for one
  * person from a light series. JSON keys follow the stable CLI contract (architecture §4):
  * `model`, `xmin_h`, `cbtmin_h`, `dlmo_h`, `melatonin_suppression_pct` (per night), `kss_hourly`;
- * `kss_sleepy_hours`, `sleep_episodes`, `entrainment`, `input`, `warnings`, `definitions` and
+ * `kss_sleepy_hours`, `melatonin_pg_ml_hourly`, `sleep_episodes`, `entrainment`, `input`, `warnings`, `definitions` and
  * `caution` are extra.
  * Without --sleep, sleep is predicted by the model (free sleep), with an optional daily alarm.
  */
@@ -99,6 +99,7 @@ export const simulateCommand: Command = {
       melatonin_suppression_pct: r.melatonin_suppression_pct.map((v) => (v === null ? null : round(v, 2))),
       kss_hourly: r.kss_hourly.map((v) => (v === null ? null : round(v, 2))),
       kss_sleepy_hours: r.kss_sleepy_hours,
+      melatonin_pg_ml_hourly: r.melatonin_pg_ml_hourly.map((v) => round(v, 2)),
       sleep_episodes: r.sleep_episodes.map((e) => ({ start_h: round(e.start_h), end_h: round(e.end_h) })),
       entrainment: r.entrainment ?? null,
       input: { light: lightPath, light_unit: light.unit, sleep: sleepPath ?? (alarm === undefined ? 'predicted' : `predicted, alarm ${alarm} h`), days },
@@ -107,6 +108,7 @@ export const simulateCommand: Command = {
         cbtmin_h: `x minimum + ${model.marker.cbtminOffset_h} h (model's phase-reference offset)`,
         dlmo_h: `CBTmin − ${DLMO_BEFORE_CBTMIN_H} h`,
         melatonin_suppression_pct: 'acute: 100·(1 − plasma melatonin area / area of the same person in dim light), per night from synthesis onset to the next onset; null when there is no melatonin to suppress or the run ends before the night is over (4 h after synthesis offset)',
+        melatonin_pg_ml_hourly: 'plasma melatonin (St Hilaire et al. 2007) at each whole hour since t = 0, with light suppression, pg/mL',
         kss_hourly: 'mean KSS (Postnova et al. 2018) over each hour awake since t = 0; null when asleep the whole hour; ≥ 7 is sleepy',
       },
       caution: HEALTH_CAUTION,

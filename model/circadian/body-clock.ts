@@ -14,6 +14,7 @@ import type { MelatoninNight } from './melatonin-pass.js';
 import type { PersonParams } from './pacemaker.js';
 import { createPacemaker, DEFAULT_PACEMAKER_ID, type PacemakerId } from './registry.js';
 import { KSS_SLEEPY } from './sleepiness-postnova.js';
+import { PMOL_L_PER_PG_ML } from './melatonin-sthilaire.js';
 import type { SleepEpisode, SleepSpec } from './sleep-input.js';
 import { simulate, stateFromPacemaker, type SimState, type SimulationRun } from './simulate.js';
 
@@ -57,6 +58,8 @@ export interface BodyClockResult {
   readonly kss_sleepy_hours: number[];
   readonly sleep_episodes: SleepEpisode[];
   readonly melatonin_nights: MelatoninNight[];
+  /** Plasma melatonin at each whole hour since t = 0 (pg/mL), with light suppression: the curve per day. */
+  readonly melatonin_pg_ml_hourly: number[];
   readonly entrainment?: { readonly days: number; readonly converged: boolean };
   /** The full run (samples, final state, solver counts). */
   readonly run: SimulationRun;
@@ -78,6 +81,22 @@ export function hourlyKss(run: SimulationRun, hours: number): (number | null)[] 
     }
   });
   for (let k = 0; k < hours; k++) if ((count[k] as number) > 0) out[k] = (sum[k] as number) / (count[k] as number);
+  return out;
+}
+
+/** Sample values at whole hours since the start (linear interpolation between samples). */
+export function hourlyValues(run: SimulationRun, values: readonly number[], hours: number): number[] {
+  const t = run.samples.t_h;
+  const out: number[] = [];
+  let i = 0;
+  for (let k = 0; k < hours; k++) {
+    const tq = run.start_h + k;
+    while (i + 1 < t.length && (t[i + 1] as number) <= tq) i++;
+    const t0 = t[i] as number;
+    const t1 = t[i + 1];
+    const v0 = values[i] as number;
+    out.push(t1 === undefined || t1 === t0 ? v0 : v0 + (((values[i + 1] as number) - v0) * (tq - t0)) / (t1 - t0));
+  }
   return out;
 }
 
@@ -126,6 +145,7 @@ export function runBodyClock(input: BodyClockInput): BodyClockResult {
     kss_sleepy_hours: kss.flatMap((v, k) => (v !== null && v >= KSS_SLEEPY ? [k] : [])),
     sleep_episodes: run.sleepEpisodes,
     melatonin_nights: run.nights,
+    melatonin_pg_ml_hourly: hourlyValues(run, run.samples.plasmaMelatonin_pmol_L, 24 * input.days).map((v) => v / PMOL_L_PER_PG_ML),
     ...(entrainment === undefined ? {} : { entrainment: { days: entrainment.days, converged: entrainment.converged } }),
     run,
   };

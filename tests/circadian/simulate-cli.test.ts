@@ -40,6 +40,11 @@ describe('zeitlight simulate', () => {
     expect(supp.length).toBe(3);
     expect(Math.abs((supp[0] as number) - (supp[1] as number))).toBeLessThan(1);
     expect(supp[2]).toBeNull();
+    // melatonin curve: low by day, nocturnal peak of tens of pg/mL (typical adult plasma levels, common practice)
+    const mel = doc.melatonin_pg_ml_hourly as number[];
+    expect(mel.length).toBe(72);
+    expect(mel[12]).toBeLessThan(1);
+    expect(Math.max(...mel.slice(24, 32))).toBeGreaterThan(20);
     expect((doc.kss_hourly as unknown[])[2]).toBeNull(); // asleep at 02:00
   });
 
