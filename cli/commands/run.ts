@@ -1,3 +1,88 @@
-import { notYetAvailable } from './not-yet.js';
+/**
+ * `zeitlight run <scenario.json> --out <dir> [--json] [--force] [--pdf] [--chromium <path>]`
+ * — the whole job: validate the scenario, read the weather file and light logs it names
+ * (paths relative to the scenario file), run the pipeline (schedules/run) and write
+ * results.json, exposure.csv and summary.csv (and report.pdf with --pdf) into the folder.
+ */
+import { readFileSync } from 'node:fs';
+import { basename, dirname, resolve } from 'node:path';
+import { CliError, UsageError } from '../cli-error.js';
+import type { Command, CommandContext } from '../command.js';
+import { positionals, stringOption } from '../args.js';
+import { formatProblem, validateScenarioText, type Scenario } from '../../schedules/index.js';
+import type { RunInput } from '../../schedules/run/index.js';
+import { runAndWrite } from '../run-output/run-and-write.js';
 
-export const runCommand = notYetAvailable('run', 'Run a scenario and write results', '<scenario.json> --out <dir>');
+function readText(file: string, what: string, field?: string): string {
+  try {
+    return readFileSync(file, 'utf8');
+  } catch (err) {
+    const code = (err as NodeJS.ErrnoException).code;
+    const why = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a folder' : (err as Error).message;
+    throw new CliError(`${field !== undefined ? `${field}: ` : ''}cannot read ${what} ${file}: ${why}`);
+  }
+}
+
+/** Weather and light-log texts the scenario refers to, read relative to the scenario file. */
+export function externalInputs(scenario: Scenario, scenarioFile: string): Pick<RunInput, 'weather' | 'lightLogTexts'> {
+  const base = dirname(resolve(scenarioFile));
+  const w = scenario.site.weather;
+  const weather = w.kind === 'file' ? { fileName: w.file, text: readText(resolve(base, w.file), 'the weather file', 'site.weather.file') } : undefined;
+  const used = new Set(scenario.personas.flatMap((p) => p.measuredLight.map((m) => m.log)));
+  const lightLogTexts: Record<string, string> = {};
+  scenario.lightLogs.forEach((l, i) => {
+    if (used.has(l.id)) lightLogTexts[l.id] = readText(resolve(base, l.file), 'the light log', `lightLogs[${i}].file`);
+  });
+  return { ...(weather !== undefined ? { weather } : {}), lightLogTexts };
+}
+
+export function validatedScenario(text: string, file: string): Scenario {
+  const v = validateScenarioText(text);
+  if (v.scenario === undefined || !v.ok) {
+    const errors = v.problems.filter((p) => p.severity === 'error');
+    const shown = errors.slice(0, 10).map((p) => `  ${formatProblem(p)}`);
+    throw new CliError(`${file}: not a valid scenario (${errors.length} error(s)):\n${shown.join('\n')}${errors.length > 10 ? `\n  … and ${errors.length - 10} more; run "zeitlight validate ${basename(file)}" for the full list` : ''}`);
+  }
+  return v.scenario;
+}
+
+export function outOption(ctx: CommandContext): string {
+  const out = stringOption(ctx, 'out');
+  if (out === undefined || out.trim() === '') throw new UsageError('--out <dir> is required: the folder for results.json, exposure.csv and summary.csv');
+  return out;
+}
+
+export const runCommand: Command = {
+  name: 'run',
+  summary: 'Run a scenario and write results',
+  usage: '<scenario.json> --out <dir> [--force] [--pdf] [--chromium <path>] [--json]',
+  options: {
+    out: { type: 'string' },
+    force: { type: 'boolean' },
+    pdf: { type: 'boolean' },
+    chromium: { type: 'string' },
+    cohort: { type: 'string' },
+    seed: { type: 'string' },
+  },
+  async run(ctx: CommandContext): Promise<number> {
+    const [file] = positionals(ctx, ['scenario.json']);
+    if (file === undefined) throw new UsageError('expected a scenario file');
+    const outDir = outOption(ctx);
+    if (ctx.values['cohort'] !== undefined || ctx.values['seed'] !== undefined) {
+      throw new UsageError('--cohort and --seed are not available in this version of zeitlight run yet; run without them for the personas as written');
+    }
+    const text = readText(file, 'the scenario');
+    const scenario = validatedScenario(text, file);
+    const inputs = externalInputs(scenario, file);
+    const chromium = stringOption(ctx, 'chromium');
+    await runAndWrite(ctx, {
+      input: { scenario, ...inputs },
+      outDir,
+      force: ctx.values['force'] === true,
+      pdf: ctx.values['pdf'] === true,
+      ...(chromium !== undefined ? { chromiumPath: chromium } : {}),
+      scenarioForReport: JSON.parse(text) as unknown,
+    });
+    return 0;
+  },
+};
