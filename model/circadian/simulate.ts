@@ -31,6 +31,8 @@ import { DEFAULT_EYELID_TRANSMISSION, normalisedEpisodes, type SleepEpisode, typ
 
 const DEG = Math.PI / 180;
 const BISECTION_ITERATIONS = 40;
+/** Tolerance for landing on a light breakpoint (h, ≈ 4 ns). */
+const BREAK_TOL_H = 1e-12;
 /** Two x minima closer than this are one event (h). */
 const MIN_MARKER_SPACING_H = 2;
 
@@ -235,10 +237,13 @@ export function simulate(opts: SimulationOptions): SimulationRun {
   let nextSample = Math.ceil(t0 / sampleStep - 1e-9) * sampleStep;
   let lastDxSign = 0;
 
-  const dayStartOf = (t: number) => (periodic ? 24 * Math.floor(t / 24) : 0);
+  // Times within BREAK_TOL_H of a breakpoint count as on it: a breakpoint shifted by whole days
+  // (24 k + s − 24 k) may come back a few ulps off.
+  const dayStartOf = (t: number) => (periodic ? 24 * Math.floor((t + BREAK_TOL_H) / 24) : 0);
+  const segmentAt = (t: number, d0: number) => segmentIndexAt(light, t - d0 + BREAK_TOL_H);
   const nextLightBreak = (t: number): number => {
     const d0 = dayStartOf(t);
-    const idx = segmentIndexAt(light, t - d0);
+    const idx = segmentAt(t, d0);
     const nxt = light.start_h[idx + 1];
     if (!periodic) return nxt ?? Infinity;
     return nxt !== undefined && nxt < 24 ? d0 + nxt : d0 + 24;
@@ -269,7 +274,7 @@ export function simulate(opts: SimulationOptions): SimulationRun {
 
   while (t < tEnd - 1e-12) {
     const d0 = dayStartOf(t);
-    const idx = segmentIndexAt(light, t - d0);
+    const idx = segmentAt(t, d0);
     const smooth = light.smooth?.[idx];
     const level = light.level[idx] as number;
     const gate = (awake ? 1 : eyelid) * sens;
