@@ -29,6 +29,8 @@ export interface BriefingPdfOptions {
   readonly cohort?: unknown;
   /** Marks the results as a layout check (shown as a banner). */
   readonly synthetic?: boolean;
+  /** Folder of a built report page; the installed dist/report/ when absent. */
+  readonly reportFolder?: string;
   /** Longest wait for the page to draw, ms. */
   readonly timeout_ms?: number;
 }
@@ -68,7 +70,7 @@ export function briefingDocument(options: BriefingPdfOptions): Record<string, un
 export async function writeBriefingPdf(options: BriefingPdfOptions): Promise<{ path: string; bytes: number }> {
   if (options.paper !== 'A4' && options.paper !== 'Letter') throw new CliError(`briefing PDF: paper must be "A4" or "Letter", not "${String(options.paper)}"`);
   const executablePath = chromiumExecutable(options.chromiumPath);
-  const folder = reportPageFolder();
+  const folder = options.reportFolder ?? reportPageFolder();
   const outPath = path.resolve(options.outPath);
   const temp = path.join(path.dirname(outPath), `.${path.basename(outPath)}.${process.pid}.partial`);
   const userDataDir = await mkdtemp(path.join(os.tmpdir(), 'zeitlight-chromium-'));

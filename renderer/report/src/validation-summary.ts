@@ -30,7 +30,8 @@ export function plainText(markdown: string): string {
 
 export function summariseValidationRecord(file: string, text: string, examples = 3): ValidationRecordSummary {
   const lines = text.split(/\r?\n/);
-  const title = plainText((lines.find((l) => l.startsWith('# ')) ?? file).replace(/^#\s+/, '')).replace(/\s*[—:-]\s*validation record$/i, '');
+  const title = plainText((lines.find((l) => l.startsWith('# ')) ?? file).replace(/^#\s+/, '')).replace(/\s*[—:-]\s*validation record$/i, '').replace(/^validation record:\s*/i, '');
+  const titled = title.charAt(0).toUpperCase() + title.slice(1);
   const found: ValidationCheck[] = [];
   let columns: string[] | null = null;
   let count = 0;
@@ -50,5 +51,5 @@ export function summariseValidationRecord(file: string, text: string, examples =
     const at = (name: string) => row[columns?.findIndex((c) => c.startsWith(name)) ?? -1] ?? '';
     if (found.length < examples) found.push({ what: plainText(at('what')), source: plainText(at('source')), result: plainText(at('result')) });
   }
-  return { file, title, checks: count, examples: found };
+  return { file, title: titled, checks: count, examples: found };
 }

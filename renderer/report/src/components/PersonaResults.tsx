@@ -116,9 +116,9 @@ export function PersonaResults({ view, summary, day }: { view: ResultsView; summ
   const recRun = rec === null || rec === summary.baseline ? undefined : findRun(view, personaId, rec.strategy.id);
   return (
     <Section id={`results-${personaId}`} title={`Results: ${summary.persona.name}`}>
-      <h3>Light at the eye</h3>
       {baseline !== undefined && (
         <div className="keep">
+          <h3>Light at the eye</h3>
           <PrintLightChart run={baseline} day={day} title={`Melanopic EDI at the eye by source on ${dayLabel} — Baseline`} />
           <ComplianceLine view={view} personaId={personaId} strategyId={baseline.strategyId} day={day} />
         </div>
@@ -129,22 +129,24 @@ export function PersonaResults({ view, summary, day }: { view: ResultsView; summ
           <ComplianceLine view={view} personaId={personaId} strategyId={recRun.strategyId} day={day} />
         </div>
       )}
-      <h3>Body clock</h3>
       <div className="keep">
+        <h3>Body clock</h3>
         <PrintPhaseChart view={view} runs={runs} strategies={strategies} />
       </div>
-      <h3>Melatonin</h3>
       <div className="keep">
+        <h3>Melatonin</h3>
         <PrintMelatoninChart runs={runs} strategies={strategies} day={day} dayLabel={dayLabel} />
       </div>
-      <h3>Sleepiness</h3>
       <div className="keep">
+        <h3>Sleepiness</h3>
         <PrintKssChart runs={runs} strategies={strategies} day={day} dayLabel={dayLabel} />
       </div>
       <KssGridTable view={view} personaId={personaId} strategyId={rec?.strategy.id ?? view.baselineId} />
-      <h3>Metrics</h3>
-      <p className="small muted">Values per strategy; in brackets the difference from the baseline.</p>
-      <MetricsTable view={view} personaId={personaId} />
+      <div className="keep">
+        <h3>Metrics</h3>
+        <p className="small muted">Values per strategy; in brackets the difference from the baseline.</p>
+        <MetricsTable view={view} personaId={personaId} />
+      </div>
     </Section>
   );
 }

@@ -76,13 +76,13 @@ export function PrintMelatoninChart({ runs, strategies, day, dayLabel }: { runs:
         <YAxis tick={TICK} width={52} label={{ value: `melatonin (${unit})`, angle: -90, position: 'insideLeft', style: { textAnchor: 'middle', fill: AXIS_INK, fontSize: 10 } }} />
         <Legend wrapperStyle={LEGEND_STYLE} iconSize={9} />
         {strategies.map((s, i) => (
-          <Line key={`${s.id}-dark`} dataKey={melatoninKey(s.id, true)} name={`${s.name}, without light`} stroke={seriesColour(i)} strokeOpacity={0.45} strokeDasharray="4 3" dot={false} isAnimationActive={false} legendType="plainline" />
+          <Line key={`${s.id}-dark`} dataKey={melatoninKey(s.id, true)} name={`${s.name}, without light`} stroke={seriesColour(i)} strokeOpacity={0.45} strokeDasharray="4 3" dot={false} isAnimationActive={false} legendType="none" />
         ))}
         {strategies.map((s, i) => (
           <Line key={s.id} dataKey={melatoninKey(s.id)} name={s.name} stroke={seriesColour(i)} strokeWidth={1.8} dot={false} isAnimationActive={false} />
         ))}
       </LineChart>
-      <p className="chart-note">Where a solid line runs below its dashed partner, light is suppressing melatonin.</p>
+      <p className="chart-note">Solid: modelled melatonin with the light of each strategy. Dashed, same colour: the same night without light. Where a solid line runs below its dashed partner, light is suppressing melatonin.</p>
     </figure>
   );
 }

@@ -248,7 +248,7 @@ export function Methods({ records }: { records: readonly ValidationRecordSummary
           <h4>
             {r.title} — {r.checks} checks
           </h4>
-          <table className="data small-table">
+          <table className="data small-table validation">
             <thead>
               <tr>
                 <th>Check</th>
