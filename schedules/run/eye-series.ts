@@ -14,7 +14,7 @@
 import { evaluateEyeLight, PLACE_ELSEWHERE, PLACE_ROOM, prepareRoom, screenEyeIlluminance_lx, type OutdoorConditions, type PreparedRoom } from '../../model/eye/index.js';
 import type { MinuteLightSeries } from '../lightlog/log-to-minutes.js';
 
-import type { Persona, Place, Room, Scenario, Screen } from '../schema/scenario-types.js';
+import type { Luminaire, Persona, Place, Room, Scenario, Screen } from '../schema/scenario-types.js';
 import { clockWindowHolds, exposureContext } from '../timeline/exposure-context.js';
 import type { ExposureSlice, ExposureTimeline } from '../timeline/exposure-types.js';
 import { sliceIndexPerMinute } from '../timeline/timeline-sampling.js';
@@ -46,6 +46,31 @@ export const STREET_LIGHT_CCT_K = 4000;
 /** Caches shared by the timelines of one run (and prepared rooms across runs). */
 export interface EyeCaches {
   readonly daylight: Map<string, { photopic: Float64Array; mel: Float64Array }>;
+  /** Per-minute daylight melanopic DER × lens factor and lens factor, by observer age. */
+  readonly daylightFactors: Map<number, { mel: Float32Array; lens: Float32Array }>;
+}
+
+function daylightFactors(outdoor: OutdoorLight, age: number, caches: EyeCaches): { mel: Float32Array; lens: Float32Array } {
+  let f = caches.daylightFactors.get(age);
+  if (f === undefined) {
+    const cct = outdoor.series.skyCct_K;
+    const mel = new Float32Array(cct.length);
+    const lens = new Float32Array(cct.length);
+    let last = Number.NaN;
+    let r = daylightResponse(6504, age);
+    for (let m = 0; m < cct.length; m++) {
+      const c = cct[m] ?? 6504;
+      if (c !== last) {
+        r = daylightResponse(c, age);
+        last = c;
+      }
+      mel[m] = r.melDer * r.lensFactor;
+      lens[m] = r.lensFactor;
+    }
+    f = { mel, lens };
+    caches.daylightFactors.set(age, f);
+  }
+  return f;
 }
 
 const preparedRooms = new Map<string, PreparedRoom>();
@@ -104,6 +129,19 @@ function roomDaylight(room: Room, gaze_deg: number, occupied: Uint8Array, scenar
   return out;
 }
 
+const nightCache = new WeakMap<Screen, Uint8Array>();
+/** 1 at the minutes of the day when the screen's night colour setting is on. */
+function nightMinutes(s: Screen): Uint8Array {
+  let a = nightCache.get(s);
+  if (a === undefined) {
+    a = new Uint8Array(1440);
+    const nm = s.nightMode;
+    if (nm !== undefined) for (let m = 0; m < 1440; m++) a[m] = clockWindowHolds(nm.start, nm.end, m) ? 1 : 0;
+    nightCache.set(s, a);
+  }
+  return a;
+}
+
 const screenLux = new WeakMap<Screen, Map<number, number>>();
 function screenEye_lx(s: Screen, brightness: number): number {
   let m = screenLux.get(s);
@@ -139,7 +177,6 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
   const sliceOf = sliceIndexPerMinute(timeline);
   const places = new Map<string, Place>(variant.places.map((p) => [p.id, p]));
   const slices = timeline.slices;
-  const skyCct = outdoor.series.skyCct_K;
   const sunElevation = outdoor.series.sun.elevation_deg;
 
   // Daylight in rooms: one evaluation per room and gaze direction.
@@ -165,6 +202,34 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
   }
 
   const streetResp = electricResponse({ kind: 'cct', cct_K: STREET_LIGHT_CCT_K }, undefined, age);
+  const dayFactor = daylightFactors(outdoor, age, inp.caches);
+  // Melanopic EDI per photopic lux (DER × lens factor) of each luminaire at each target CCT, and of each screen by day / night.
+  const lumMel = new Map<Luminaire, Map<number, number>>();
+  const lumMelAt = (l: Luminaire, cct: number): number => {
+    let m = lumMel.get(l);
+    if (m === undefined) {
+      m = new Map();
+      lumMel.set(l, m);
+    }
+    let v = m.get(cct);
+    if (v === undefined) {
+      const r = electricResponse(l.spectrum, Number.isFinite(cct) ? cct : undefined, age);
+      v = r.melDer * r.lensFactor;
+      m.set(cct, v);
+    }
+    return v;
+  };
+  const scrMel = new Map<Screen, [number, number]>();
+  const scrMelAt = (sc: Screen, night: boolean): number => {
+    let v = scrMel.get(sc);
+    if (v === undefined) {
+      const d = screenResponse(sc.spectrum, undefined, age);
+      const nr = sc.nightMode !== undefined ? screenResponse(sc.spectrum, sc.nightMode.cct_K, age) : d;
+      v = [d.melDer * d.lensFactor, nr.melDer * nr.lensFactor];
+      scrMel.set(sc, v);
+    }
+    return night ? v[1] : v[0];
+  };
   let contextSlice: ExposureSlice | undefined;
   let context: ReturnType<typeof exposureContext> | undefined;
   for (let m = 0; m < n; m++) {
@@ -178,7 +243,8 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
     const place = ctx.place;
     const day = timeline.days[clock.dayIndex[m] ?? 0];
     const weekday = day?.weekday ?? 'mon';
-    const dayResp = daylightResponse(skyCct[m] ?? 6504, age);
+    const dayMel = dayFactor.mel[m] ?? 1;
+    const dayLens = dayFactor.lens[m] ?? 1;
     let pDay = 0;
     let mDay = 0;
     let pEl = 0;
@@ -191,22 +257,20 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
       const rd = k >= 0 ? roomDay[k] : undefined;
       if (rd !== undefined) {
         pDay = rd.photopic[m] ?? 0;
-        mDay = (rd.mel[m] ?? 0) * dayResp.lensFactor;
+        mDay = (rd.mel[m] ?? 0) * dayLens;
       }
       for (const l of place.luminaires) {
         const wk = luminaireWeek(l);
         const level = wk.level[weekday][minuteOfDay] ?? 0;
         if (level <= 0) continue;
-        const cct = wk.cct_K[weekday][minuteOfDay] ?? Number.NaN;
-        const r = electricResponse(l.spectrum, Number.isFinite(cct) ? cct : undefined, age);
         const lux = level * l.eyeIlluminance_lx;
         pEl += lux;
-        mEl += lux * r.melDer * r.lensFactor;
+        mEl += lux * lumMelAt(l, wk.cct_K[weekday][minuteOfDay] ?? Number.NaN);
       }
     } else if (place.kind === 'vehicle') {
       const lux = (outdoor.outdoorEye_lx[m] ?? 0) * VEHICLE_VIEW_FACTOR * place.windowTransmittance;
       pDay = lux;
-      mDay = lux * dayResp.melDer * dayResp.lensFactor;
+      mDay = lux * dayMel;
       if (dark && place.interiorIlluminance_lx > 0) {
         pEl = place.interiorIlluminance_lx;
         mEl = pEl * streetResp.melDer * streetResp.lensFactor;
@@ -214,7 +278,7 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
     } else {
       const lux = (outdoor.outdoorEye_lx[m] ?? 0) * OUTDOOR_SHADE_FACTOR[place.shade];
       pOut = lux;
-      mOut = lux * dayResp.melDer * dayResp.lensFactor;
+      mOut = lux * dayMel;
       if (dark) {
         pOut += place.streetLighting_lx;
         mOut += place.streetLighting_lx * streetResp.melDer * streetResp.lensFactor;
@@ -223,10 +287,9 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
     let pScr = 0;
     let mScr = 0;
     if (ctx.screen !== null) {
-      const night = ctx.screen.nightMode !== undefined && clockWindowHolds(ctx.screen.nightMode.start, ctx.screen.nightMode.end, minuteOfDay);
-      const r = screenResponse(ctx.screen.spectrum, night ? ctx.screen.nightMode?.cct_K : undefined, age);
+      const night = nightMinutes(ctx.screen)[minuteOfDay] === 1;
       pScr = screenEye_lx(ctx.screen, s.screenBrightness);
-      mScr = pScr * r.melDer * r.lensFactor;
+      mScr = pScr * scrMelAt(ctx.screen, night);
     }
     const pT = ctx.eyewear?.photopicTransmittance ?? 1;
     const mT = ctx.eyewear?.melanopicTransmittance ?? 1;

@@ -5,13 +5,12 @@
  * the vertical illuminance at the eye of a person outdoors (Perez sky, gaze averaged over all
  * horizontal directions, model/daylight/outdoor-eye.ts) with the ground reflectance of the site.
  */
-import { daylightFromEpw, daylightFromSkyConditions, outdoorEyeSeries, parseEpw, type DaylightSeries, type SkyCondition } from '../../model/daylight/index.js';
+import { daylightFromEpw, daylightFromSkyConditions, groundReflectanceWithSnow, outdoorEyeIlluminance, parseEpw, type DaylightSeries, type SkyCondition } from '../../model/daylight/index.js';
 import { outdoorConditionsFromDaylightSeries, type OutdoorConditions } from '../../model/eye/index.js';
 import type { Scenario } from '../schema/scenario-types.js';
 import { utcOffsetAt_min } from '../time/local-calendar.js';
 import type { ExposureTimeline } from '../timeline/exposure-types.js';
 import { dateOfDay } from '../timeline/wall-state.js';
-import type { LocalClock } from './local-clock.js';
 import { RunInputError } from './run-input-error.js';
 import { skyConditionForDay } from './sky-days.js';
 
@@ -36,7 +35,11 @@ function standardOffset_h(zone: string, year: number): number {
   return Math.min(utcOffsetAt_min(zone, Date.UTC(year, 0, 15)), utcOffsetAt_min(zone, Date.UTC(year, 6, 15))) / 60;
 }
 
-export function outdoorLight(scenario: Scenario, timeline: ExposureTimeline, clock: LocalClock, weather: WeatherText | undefined): OutdoorLight {
+/**
+ * `needsOutdoorEye` marks the minutes at which someone is outdoors or in a vehicle; the outdoor
+ * eye illuminance is computed there only (0 elsewhere) — all minutes when absent.
+ */
+export function outdoorLight(scenario: Scenario, timeline: ExposureTimeline, weather: WeatherText | undefined, needsOutdoorEye?: Uint8Array): OutdoorLight {
   const site = scenario.site;
   const window = { startEpochMs: timeline.runStartUtc_ms, step_min: 1, count: timeline.total_min };
   let series: DaylightSeries;
@@ -65,14 +68,30 @@ export function outdoorLight(scenario: Scenario, timeline: ExposureTimeline, clo
     });
     skyByDay = conditions;
   }
+  const snowMonths = new Set(site.ground.snow.months);
   const month = new Uint8Array(timeline.total_min);
   for (const d of timeline.days) month.fill(Number(d.date.slice(5, 7)), d.start_min, d.start_min + d.length_min);
-  void clock;
-  const snowMonths = new Set(site.ground.snow.months);
-  const eye = outdoorEyeSeries(series, { gazeAzimuth_deg: 'all-directions', groundReflectance: site.ground.reflectance });
-  const conditions = outdoorConditionsFromDaylightSeries(series, month, eye.total_lx);
+  const eye_lx = new Float64Array(timeline.total_min);
+  for (let i = 0; i < eye_lx.length; i++) {
+    if (needsOutdoorEye !== undefined && needsOutdoorEye[i] !== 1) continue;
+    if (!((series.diffuseHorizontal_lx[i] ?? 0) > 0 || (series.directNormal_lx[i] ?? 0) > 0)) continue;
+    eye_lx[i] = outdoorEyeIlluminance({
+      sunZenith_deg: series.sun.zenith_deg[i] as number,
+      sunAzimuth_deg: series.sun.azimuth_deg[i] as number,
+      directNormal_lx: series.directNormal_lx[i] as number,
+      diffuseHorizontal_lx: series.diffuseHorizontal_lx[i] as number,
+      globalHorizontal_lx: series.globalHorizontal_lx[i] as number,
+      groundReflectance: snowMonths.has(month[i] as number) && site.weather.kind === 'sky-model' ? site.ground.snow.reflectance : groundReflectanceWithSnow(site.ground.reflectance, series.snowDepth_cm[i] as number, series.daysSinceSnowfall[i] as number),
+      gazeAzimuth_deg: 'all-directions',
+      gazeTilt_deg: 90,
+      skyModel: 'perez',
+      clearness: series.clearness[i] as number,
+      brightness: series.brightness[i] as number,
+    }).total_lx;
+  }
+  const conditions = outdoorConditionsFromDaylightSeries(series, month);
   // Snow cover from the month list when the weather has no snow depth.
   const snowOnGround = conditions.snowOnGround ?? new Uint8Array(timeline.total_min);
   if (site.weather.kind === 'sky-model' || !site.weather.snowFromFile) for (let i = 0; i < month.length; i++) snowOnGround[i] = snowMonths.has(month[i] as number) ? 1 : 0;
-  return { series, conditions: { ...conditions, snowOnGround }, outdoorEye_lx: eye.total_lx, skyByDay, filledHours };
+  return { series, conditions: { ...conditions, snowOnGround }, outdoorEye_lx: eye_lx, skyByDay, filledHours };
 }

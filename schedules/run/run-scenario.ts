@@ -94,12 +94,16 @@ export function runScenario(input: RunInput): RunOutput {
   const first = expanded.timelines[0];
   if (first === undefined) throw new RunInputError('personas', 'no persona to run');
   const clock = localClock(first);
-  const outdoor = outdoorLight(scenario, first, clock, input.weather);
+  // Minutes at which anyone is outdoors or in a vehicle under any strategy.
+  const outside = new Uint8Array(first.total_min);
+  const indoorIds = new Set(expanded.variants.flatMap((v) => v.scenario.places.filter((p) => p.kind === 'room').map((p) => p.id)));
+  for (const t of expanded.timelines) for (const s of t.slices) if (!indoorIds.has(s.placeId)) outside.fill(1, s.start_min, s.end_min);
+  const outdoor = outdoorLight(scenario, first, input.weather, outside);
   const warnings: string[] = [];
   if (outdoor.filledHours > 0) warnings.push(`weather file: ${outdoor.filledHours} hour(s) with missing values were filled from a neighbour`);
   const logs = importLogs(scenario, first, input.lightLogTexts ?? {}, warnings);
   const night = nightBlinds(scenario, first);
-  const caches: EyeCaches = { daylight: new Map() };
+  const caches: EyeCaches = { daylight: new Map(), daylightFactors: new Map() };
   const wanted = input.personaIds === undefined ? undefined : new Set(input.personaIds);
   const light: TimelineLight[] = [];
 
