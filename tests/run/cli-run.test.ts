@@ -1,0 +1,95 @@
+/**
+ * `zeitlight run` and `zeitlight demo` called through their command modules: the files written,
+ * refusal of a folder holding other files, --force, no half-written files, and clear messages
+ * for bad input (invalid scenario, missing weather file, missing --out).
+ */
+import { existsSync, mkdtempSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { describe, expect, test } from 'vitest';
+import { CliError } from '../../cli/cli-error.js';
+import type { CommandContext } from '../../cli/command.js';
+import { demoCommand } from '../../cli/commands/demo.js';
+import { runCommand } from '../../cli/commands/run.js';
+import { DEMO_SCENARIO } from '../../schedules/index.js';
+
+function ctx(positionals: string[], values: Record<string, string | boolean>, json = false) {
+  const out: string[] = [];
+  const err: string[] = [];
+  const c: CommandContext = { positionals, values: { ...values, ...(json ? { json: true } : {}) }, json, stdout: (t) => out.push(t), stderr: (t) => err.push(t) };
+  return { c, out, err };
+}
+
+const tmp = () => mkdtempSync(join(tmpdir(), 'zeitlight-run-'));
+
+function shortScenario(extra: Record<string, unknown> = {}): string {
+  return JSON.stringify({ ...DEMO_SCENARIO, run: { startDate: '2026-03-23', days: 2 }, strategies: [], ...extra });
+}
+
+describe('zeitlight run', () => {
+  test('writes results.json, exposure.csv and summary.csv and prints the results with --json', async () => {
+    const dir = tmp();
+    const file = join(dir, 'scenario.json');
+    writeFileSync(file, shortScenario());
+    const out = join(dir, 'out');
+    const { c, out: stdout } = ctx([file], { out }, true);
+    expect(await runCommand.run(c)).toBe(0);
+    expect(readdirSync(out).sort()).toEqual(['exposure.csv', 'results.json', 'summary.csv']);
+    const printed = JSON.parse(stdout.join('')) as { format: string; version: number };
+    expect(printed.format).toBe('zeitlight-results');
+    expect(JSON.parse(readFileSync(join(out, 'results.json'), 'utf8'))).toEqual(printed);
+  });
+
+  test('refuses a folder holding other files, and writes into it with --force', async () => {
+    const dir = tmp();
+    const file = join(dir, 'scenario.json');
+    writeFileSync(file, shortScenario());
+    writeFileSync(join(dir, 'notes.txt'), 'mine');
+    await expect(runCommand.run(ctx([file], { out: dir }).c)).rejects.toThrow(/holds other files \(.*notes\.txt.*\).*--force/);
+    expect(existsSync(join(dir, 'results.json'))).toBe(false);
+    expect(await runCommand.run(ctx([file], { out: dir, force: true }).c)).toBe(0);
+    expect(readFileSync(join(dir, 'notes.txt'), 'utf8')).toBe('mine');
+    expect(readdirSync(dir).filter((f) => f.endsWith('.partial'))).toEqual([]);
+  });
+
+  test('a scenario with an error is refused with its path and nothing is written', async () => {
+    const dir = tmp();
+    const file = join(dir, 'bad.json');
+    writeFileSync(file, JSON.stringify({ ...DEMO_SCENARIO, run: { startDate: '2026-03-23', days: 0 } }));
+    const out = join(dir, 'out');
+    await expect(runCommand.run(ctx([file], { out }).c)).rejects.toThrow(/bad\.json: not a valid scenario[\s\S]*run\.days/);
+    expect(existsSync(join(out, 'results.json'))).toBe(false);
+  });
+
+  test('a missing weather file is named with the scenario field', async () => {
+    const dir = tmp();
+    const file = join(dir, 'scenario.json');
+    writeFileSync(file, shortScenario({ site: { ...DEMO_SCENARIO.site, weather: { kind: 'file', file: 'nowhere.epw' } } }));
+    const err = await runCommand.run(ctx([file], { out: join(dir, 'out') }).c).catch((e: unknown) => e);
+    expect(err).toBeInstanceOf(CliError);
+    expect(String((err as Error).message)).toMatch(/site\.weather\.file: cannot read the weather file .*nowhere\.epw: no such file/);
+  });
+
+  test('a weather file that is not an EPW is refused naming the file', async () => {
+    const dir = tmp();
+    writeFileSync(join(dir, 'w.epw'), 'this is not a weather file\n');
+    const file = join(dir, 'scenario.json');
+    writeFileSync(file, shortScenario({ site: { ...DEMO_SCENARIO.site, weather: { kind: 'file', file: 'w.epw' } } }));
+    await expect(runCommand.run(ctx([file], { out: join(dir, 'out') }).c)).rejects.toThrow(/site\.weather\.file: w\.epw/);
+  });
+
+  test('--out is required', async () => {
+    await expect(runCommand.run(ctx(['x.json'], {}).c)).rejects.toThrow(/--out <dir> is required/);
+  });
+});
+
+describe('zeitlight demo', () => {
+  test('writes the scenario it ran next to the results', async () => {
+    const out = join(tmp(), 'demo');
+    const { c, out: stdout } = ctx([], { out });
+    expect(await demoCommand.run(c)).toBe(0);
+    expect(readdirSync(out).sort()).toEqual(['exposure.csv', 'results.json', 'scenario.json', 'summary.csv']);
+    expect(JSON.parse(readFileSync(join(out, 'scenario.json'), 'utf8'))).toEqual(JSON.parse(JSON.stringify(DEMO_SCENARIO)));
+    expect(stdout.join('')).toMatch(/recommended:[\s\S]*Caution: model estimates/);
+  }, 60_000);
+});
