@@ -14,7 +14,8 @@ import { REPORT_ORIGIN, reportAsset, reportPageFolder } from './report-page.js';
 export type PaperSize = 'A4' | 'Letter';
 
 export interface BriefingPdfOptions {
-  /** Results in the renderer's results view shape (personas, strategies, runs, metrics). */
+  /** The run's results document (results.json, "zeitlight-results"), or results already in the
+   *  renderer's results-view shape (personas, strategies, runs, metrics). */
   readonly results: unknown;
   /** The scenario as read from its file. */
   readonly scenario: unknown;
@@ -46,6 +47,10 @@ interface PagePrintSettings {
   margins_mm: { top: number; bottom: number; left: number; right: number };
 }
 
+function isResultsDocument(value: unknown): boolean {
+  return typeof value === 'object' && value !== null && (value as { format?: unknown }).format === 'zeitlight-results';
+}
+
 function today(): string {
   const now = new Date();
   return `${now.getFullYear()}-${String(now.getMonth() + 1).padStart(2, '0')}-${String(now.getDate()).padStart(2, '0')}`;
@@ -59,7 +64,7 @@ export function briefingDocument(options: BriefingPdfOptions): Record<string, un
     generatedOn: options.generatedOn ?? today(),
     zeitlightVersion: VERSION,
     scenario: options.scenario,
-    view: options.results,
+    ...(isResultsDocument(options.results) ? { results: options.results } : { view: options.results }),
     ...(options.client === undefined ? {} : { client: options.client }),
     ...(options.cohort === undefined ? {} : { cohort: options.cohort }),
     ...(options.synthetic === true ? { synthetic: true } : {}),

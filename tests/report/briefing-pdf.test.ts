@@ -1,8 +1,8 @@
 // The client briefing read back from its PDF with poppler-utils (an outside reader): sections in
 // order, the summary's numbers, cautions on the summary page and at the end, page count, every page
 // drawn, fonts embedded, paper sizes, repeatable text, and a clear message without Chromium.
-// Results: a synthetic view of the built-in demo (tests/report/synthetic-briefing.ts) until the
-// run pipeline writes results.json.
+// Results: the run pipeline on the built-in demo scenario (the same results.json `zeitlight demo`
+// writes); a second briefing from the renderer's synthetic layout view checks the view path.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { copyFileSync, existsSync, mkdirSync, mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -10,27 +10,33 @@ import * as path from 'node:path';
 import { build } from 'vite';
 import { writeBriefingPdf } from '../../cli/report/write-briefing-pdf.js';
 import { DEMO_SCENARIO } from '../../schedules/demo/demo-scenario.js';
-import { personaSummaries } from '../../renderer/report/src/headlines.js';
-import { scenarioFacts } from '../../renderer/report/src/scenario-facts.js';
-import { formatNumber } from '../../renderer/src/charts/comparison-data.js';
+import { validateScenarioValue } from '../../schedules/validation/validate-scenario.js';
+import { runScenario } from '../../schedules/run/run-scenario.js';
+import type { RunResults } from '../../schedules/run/results-types.js';
 import { demoSyntheticView } from './synthetic-briefing.js';
 import { pageVariances, pdfFonts, pdfImageCount, pdfInfo, pdfText } from './pdf-tools.js';
 
 const ROOT = path.resolve(import.meta.dirname, '..', '..');
 const work = mkdtempSync(path.join(tmpdir(), 'zeitlight-briefing-test-'));
 const pageFolder = path.join(work, 'page');
-const view = demoSyntheticView();
-const common = { results: view, scenario: DEMO_SCENARIO, generatedOn: '2026-12-01', synthetic: true, reportFolder: pageFolder } as const;
+let results: RunResults;
+const common = { scenario: DEMO_SCENARIO, generatedOn: '2026-12-01', reportFolder: pageFolder } as const;
 const a4 = path.join(work, 'a.pdf');
+const synthetic = path.join(work, 'synthetic.pdf');
 const a4Again = path.join(work, 'b.pdf');
 const letter = path.join(work, 'letter.pdf');
 
 beforeAll(async () => {
   // A private build of the report page, so a stale or concurrent dist/report cannot affect this.
   await build({ configFile: path.join(ROOT, 'vite.report.config.ts'), logLevel: 'warn', build: { outDir: pageFolder, emptyOutDir: true } });
-  await writeBriefingPdf({ ...common, outPath: a4, paper: 'A4' });
-  await writeBriefingPdf({ ...common, outPath: a4Again, paper: 'A4' });
-  await writeBriefingPdf({ ...common, outPath: letter, paper: 'Letter' });
+  const validated = validateScenarioValue(DEMO_SCENARIO);
+  if (validated.scenario === undefined) throw new Error('demo scenario does not validate');
+  // through JSON, exactly as results.json is read back
+  results = JSON.parse(JSON.stringify(runScenario({ scenario: validated.scenario }).results)) as RunResults;
+  await writeBriefingPdf({ ...common, results, outPath: a4, paper: 'A4' });
+  await writeBriefingPdf({ ...common, results, outPath: a4Again, paper: 'A4' });
+  await writeBriefingPdf({ ...common, results, outPath: letter, paper: 'Letter' });
+  await writeBriefingPdf({ ...common, results: demoSyntheticView(), synthetic: true, outPath: synthetic, paper: 'A4' });
 }, 300_000);
 
 afterAll(() => {
@@ -60,28 +66,34 @@ describe('briefing PDF of the demo scenario', () => {
     expect(cover).toContain('1 December 2026');
     expect(cover).toContain('Zeitlight 0.1.0');
     expect(cover).toContain('zeitlight-scenario version 2');
-    expect(cover).toContain('not a simulation result');
+    expect(cover).not.toContain('not a simulation result');
+    expect(pdfText(synthetic, 1)).toContain('not a simulation result');
   });
 
-  it('shows every strategy’s summary numbers from the results on the summary page', () => {
+  it('shows the recommendation and every strategy’s three numbers from results.json on the summary page', () => {
     // pdftotext's layout mode may close up "9 %" to "9%" in tight columns; compare without that space
-    const summaryPage = pdfText(a4, 2).replace(/\s+/g, ' ').replace(/(\d) %/g, '$1%');
-    const facts = scenarioFacts(DEMO_SCENARIO);
-    if (!facts.ok) throw new Error(facts.message);
-    for (const s of personaSummaries(view, facts.facts.workMinutesPerHour)) {
-      expect(summaryPage).toContain(s.persona.name);
-      expect(summaryPage).toContain(s.sentences.recommendation.replace(/\s+/g, ' ').replace(/(\d) %/g, '$1%'));
-      for (const h of s.all) {
+    const squeeze = (t: string) => t.replace(/\s+/g, ' ').replace(/(\d) %/g, '$1%');
+    const summaryPages = squeeze(pdfText(a4, 2) + pdfText(a4, 3));
+    for (const persona of results.personas) {
+      expect(summaryPages).toContain(persona.name);
+      expect(summaryPages).toContain(squeeze(persona.recommendation.reason));
+      const rec = persona.strategies.find((s) => s.id === persona.recommendation.strategy_id);
+      for (const h of rec?.headlines ?? []) expect(summaryPages).toContain(squeeze(h.sentence));
+      const table = summaryPages.slice(summaryPages.indexOf(persona.name));
+      for (const s of persona.strategies) {
         // long strategy names wrap inside their cell, so the row is found by the name's start
-        const start = summaryPage.indexOf(h.strategy.name.slice(0, 24));
-        expect(start, h.strategy.name).toBeGreaterThanOrEqual(0);
-        const row = summaryPage.slice(start);
-        expect(row).toContain(`${formatNumber(h.suppression_pct, 0)}%`);
-        expect(row).toContain(`${formatNumber(h.sleepyShare_pct, 0)}%`);
+        const start = table.indexOf(s.name.slice(0, 24));
+        expect(start, s.name).toBeGreaterThanOrEqual(0);
+        const row = table.slice(start);
+        if (s.summary.mean_melatonin_suppression_pct !== null) expect(row).toContain(`${Math.round(s.summary.mean_melatonin_suppression_pct)}%`);
+        if (s.summary.work_hours_kss_ge_7_share !== null) expect(row).toContain(`${Math.round(s.summary.work_hours_kss_ge_7_share * 100)}%`);
       }
     }
-    // the suppression values of the results view, not recomputed: 22 % baseline in the synthetic view
-    expect(summaryPage).toContain('22%');
+  });
+
+  it('draws the view-model path too: a synthetic layout view gives every section', () => {
+    const text = pdfText(synthetic);
+    for (const heading of ['Summary', 'What was modelled', 'Methods and assumptions', 'Cautions']) expect(text).toContain(heading);
   });
 
   it('carries the cautions on the summary page and again at the end', () => {
@@ -139,7 +151,7 @@ describe('briefing PDF of the demo scenario', () => {
 describe('briefing PDF without Chromium', () => {
   it('names how to get Chromium and writes nothing', async () => {
     const out = path.join(work, 'none.pdf');
-    const attempt = writeBriefingPdf({ ...common, outPath: out, paper: 'A4', chromiumPath: path.join(work, 'no-such-chromium') });
+    const attempt = writeBriefingPdf({ ...common, results: demoSyntheticView(), outPath: out, paper: 'A4', chromiumPath: path.join(work, 'no-such-chromium') });
     await expect(attempt).rejects.toThrow(/apt-get install chromium.*ZEITLIGHT_CHROMIUM/);
     expect(existsSync(out)).toBe(false);
     expect(readdirSync(work).filter((f) => f.includes('partial'))).toEqual([]);

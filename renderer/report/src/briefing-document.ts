@@ -35,8 +35,10 @@ export interface BriefingDocument {
   readonly client?: string;
   /** The scenario as in its file (validated again on the page; defaults filled there). */
   readonly scenario: unknown;
-  /** Results in the renderer's view model. */
-  readonly view: ResultsView;
+  /** Results of the run pipeline (results.json, "zeitlight-results"); preferred when present. */
+  readonly results?: unknown;
+  /** Results already in the renderer's view model (the app, layout checks). */
+  readonly view?: ResultsView;
   readonly cohort?: CohortSummary;
   /** True when the results are a layout check, not a simulation (shown as a banner). */
   readonly synthetic?: boolean;
@@ -72,8 +74,12 @@ export function checkBriefingDocument(value: unknown): { ok: true; document: Bri
   if (value.paper !== 'A4' && value.paper !== 'Letter') return { ok: false, message: 'briefing document: field "paper" must be "A4" or "Letter"' };
   if (typeof value.generatedOn !== 'string' || !/^\d{4}-\d{2}-\d{2}$/.test(value.generatedOn)) return { ok: false, message: 'briefing document: field "generatedOn" must be a date "YYYY-MM-DD"' };
   if (typeof value.zeitlightVersion !== 'string') return { ok: false, message: 'briefing document: field "zeitlightVersion" must be text' };
+  if (isRecord(value.results)) {
+    if (value.results.format !== 'zeitlight-results' || !Array.isArray(value.results.personas)) return { ok: false, message: 'briefing document: field "results" must be a results document (format "zeitlight-results")' };
+    return { ok: true, document: value as unknown as BriefingDocument };
+  }
   const view = value.view;
-  if (!isRecord(view)) return { ok: false, message: 'briefing document: field "view" must be an object' };
+  if (!isRecord(view)) return { ok: false, message: 'briefing document: needs "results" (results.json) or "view"' };
   for (const key of ['strategies', 'personas', 'runs'] as const) {
     if (!Array.isArray(view[key])) return { ok: false, message: `briefing document: field "view.${key}" must be a list` };
   }

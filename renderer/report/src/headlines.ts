@@ -26,8 +26,15 @@ export interface PersonaSummary {
   readonly baseline: StrategyHeadline | null;
   readonly recommended: StrategyHeadline | null;
   readonly all: readonly StrategyHeadline[];
-  readonly sentences: { readonly phase: string; readonly suppression: string; readonly sleepiness: string; readonly recommendation: string };
+  readonly sentences: { readonly phase: string; readonly suppression: string; readonly sleepiness: string; readonly recommendation: string; readonly reason: string };
+  /** How the recommendation was chosen, in words. */
+  readonly rule: string;
+  /** Phase marker the shift is read from. */
+  readonly phaseMarker: 'DLMO' | 'CBTmin';
 }
+
+export const BRIEFING_RECOMMENDATION_RULE =
+  'The strategy with the lowest share of sleepy work hours (KSS ≥ 7); within half a percentage point, the one with less evening melatonin suppression. A strategy is recommended over the baseline only when it is better on one of these two and not worse on the other.';
 
 const SUPPRESSION_IDS = ['evening-suppression', 'melatonin-suppression', 'suppression', 'melatonin_suppression_pct'];
 /** Equal within this many percentage points (the numbers are shown to whole percent). */
@@ -141,8 +148,11 @@ export function personaSummaries(view: ResultsView, workMinutesPerHour: Readonly
       baseline,
       recommended,
       all,
+      rule: BRIEFING_RECOMMENDATION_RULE,
+      phaseMarker: 'DLMO',
       sentences: {
         recommendation,
+        reason: '',
         phase: phaseSentence(persona.name, recommended, isBaseline),
         suppression: suppressionSentence(recommended, baseline, isBaseline),
         sleepiness: sleepinessSentence(recommended, baseline, isBaseline, basis),

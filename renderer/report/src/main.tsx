@@ -8,6 +8,7 @@ import { scenarioFacts } from './scenario-facts.js';
 import { validationRecords } from './validation-records.js';
 import { printSettings } from './print-settings.js';
 import { BriefingReport } from './BriefingReport.js';
+import { reportData } from './report-data.js';
 import './print.css';
 
 let root: Root | null = null;
@@ -29,8 +30,9 @@ function render(input: unknown): void {
   document.documentElement.dataset.paper = checked.document.paper;
   root ??= createRoot(container);
   try {
-    const doc = checked.document;
-    flushSync(() => root?.render(<BriefingReport doc={doc} facts={facts.facts} records={validationRecords()} />));
+    const data = reportData(checked.document, facts.facts);
+    if ('error' in data) return fail(data.error);
+    flushSync(() => root?.render(<BriefingReport data={data} records={validationRecords()} />));
   } catch (error) {
     return fail(`report page: ${error instanceof Error ? error.message : String(error)}`);
   }

@@ -8,7 +8,7 @@ import { kssColour } from '../../../src/charts/palette.js';
 import { bandCompliance, lightAtEyeRows, recommendationBands } from '../../../src/charts/light-at-eye-data.js';
 import { formatClock, formatDayLabel } from '../../../src/charts/clock.js';
 import type { PersonaSummary } from '../headlines.js';
-import { PrintKssChart, PrintLightChart, PrintMelatoninChart, PrintPhaseChart } from './print-charts.js';
+import { lightAxisTop_lx, PrintKssChart, PrintLightChart, PrintMelatoninChart, PrintPhaseChart, PrintSuppressionChart } from './print-charts.js';
 import { Section } from './sections.js';
 
 const BAND_WORDS = { day: 'day (≥ 250 lx)', evening: 'evening (≤ 10 lx)', night: 'night (≤ 1 lx)' } as const;
@@ -106,7 +106,7 @@ function MetricsTable({ view, personaId }: { view: ResultsView; personaId: strin
   );
 }
 
-export function PersonaResults({ view, summary, day }: { view: ResultsView; summary: PersonaSummary; day: number }) {
+export function PersonaResults({ view, summary, day, nightly }: { view: ResultsView; summary: PersonaSummary; day: number; nightly: ReadonlyMap<string, readonly { day: number; pct: number | null }[]> | null }) {
   const personaId = summary.persona.id;
   const runs = view.runs.filter((r) => r.personaId === personaId);
   const strategies = view.strategies.filter((s) => runs.some((r) => r.strategyId === s.id));
@@ -114,18 +114,20 @@ export function PersonaResults({ view, summary, day }: { view: ResultsView; summ
   const baseline = findRun(view, personaId, view.baselineId);
   const rec = summary.recommended;
   const recRun = rec === null || rec === summary.baseline ? undefined : findRun(view, personaId, rec.strategy.id);
+  // one axis for both light charts, so they compare at a glance
+  const axisTop_lx = Math.max(...[baseline, recRun].map((r) => (r === undefined ? 0 : lightAxisTop_lx(lightAtEyeRows(r.light, day, 10).map((x) => x.total_lx)).top)));
   return (
     <Section id={`results-${personaId}`} title={`Results: ${summary.persona.name}`}>
       {baseline !== undefined && (
         <div className="keep">
           <h3>Light at the eye</h3>
-          <PrintLightChart run={baseline} day={day} title={`Melanopic EDI at the eye by source on ${dayLabel} — Baseline`} />
+          <PrintLightChart run={baseline} day={day} axisTop_lx={axisTop_lx} title={`Melanopic EDI at the eye by source on ${dayLabel} — Baseline`} />
           <ComplianceLine view={view} personaId={personaId} strategyId={baseline.strategyId} day={day} />
         </div>
       )}
       {recRun !== undefined && rec !== null && (
         <div className="keep">
-          <PrintLightChart run={recRun} day={day} title={`Melanopic EDI at the eye by source on ${dayLabel} — ${rec.strategy.name}`} />
+          <PrintLightChart run={recRun} day={day} axisTop_lx={axisTop_lx} title={`Melanopic EDI at the eye by source on ${dayLabel} — ${rec.strategy.name}`} />
           <ComplianceLine view={view} personaId={personaId} strategyId={recRun.strategyId} day={day} />
         </div>
       )}
@@ -135,7 +137,13 @@ export function PersonaResults({ view, summary, day }: { view: ResultsView; summ
       </div>
       <div className="keep">
         <h3>Melatonin</h3>
-        <PrintMelatoninChart runs={runs} strategies={strategies} day={day} dayLabel={dayLabel} />
+        {runs.some((r) => r.melatonin.time_h.length > 0) ? (
+          <PrintMelatoninChart runs={runs} strategies={strategies} day={day} dayLabel={dayLabel} />
+        ) : nightly !== null ? (
+          <PrintSuppressionChart view={view} strategies={strategies} nights={new Map(strategies.map((s) => [s.id, nightly.get(`${personaId}:${s.id}`) ?? []]))} />
+        ) : (
+          <p className="small muted">No melatonin results in this run.</p>
+        )}
       </div>
       <div className="keep">
         <h3>Sleepiness</h3>

@@ -16,9 +16,27 @@ const GRID = '#e3e6ea';
 const TICK = { fontSize: 10, fill: AXIS_INK };
 const LEGEND_STYLE = { fontSize: 10, lineHeight: '14px' };
 
-export function PrintLightChart({ run, day, title }: { run: RunView; day: number; title: string }) {
+/**
+ * Top of the light axis: brief outdoor peaks (thousands of lux) would flatten the indoor light and
+ * the 250 lx line, so the axis stops at a round value above the 90th percentile of the day's
+ * lit values (at least 400 lx); taller peaks are cut and their maximum is stated.
+ */
+export function lightAxisTop_lx(totals: readonly number[]): { top: number; peak: number } {
+  const lit = totals.filter((v) => v > 0.5).sort((a, b) => a - b);
+  const peak = lit[lit.length - 1] ?? 0;
+  const p90 = lit[Math.floor(0.9 * (lit.length - 1))] ?? 0;
+  const want = Math.max(400, 1.25 * p90);
+  const step = want <= 1000 ? 100 : want <= 5000 ? 500 : 1000;
+  const top = Math.ceil(want / step) * step;
+  return { top: peak <= top ? Math.max(top, Math.ceil(peak / step) * step) : top, peak };
+}
+
+export function PrintLightChart({ run, day, title, axisTop_lx }: { run: RunView; day: number; title: string; axisTop_lx?: number }) {
   const rows = lightAtEyeRows(run.light, day, 10);
   const bands = recommendationBands(run.sleep, day);
+  const auto = lightAxisTop_lx(rows.map((r) => r.total_lx));
+  const top = axisTop_lx ?? auto.top;
+  const cut = auto.peak > top;
   return (
     <figure className="chart">
       <figcaption className="chart-title">{title}</figcaption>
@@ -28,7 +46,7 @@ export function PrintLightChart({ run, day, title }: { run: RunView; day: number
           <ReferenceArea key={`a${i}`} x1={b.from_h} x2={b.to_h} fill={BAND_COLOURS[b.kind]} fillOpacity={b.kind === 'night' ? 0.07 : 0.06} ifOverflow="hidden" />
         ))}
         <XAxis dataKey="clock_h" type="number" domain={[0, 24]} ticks={[0, 3, 6, 9, 12, 15, 18, 21, 24]} tick={TICK} tickFormatter={(h: number) => formatClock(h === 24 ? 0 : h)} />
-        <YAxis tick={TICK} width={52} domain={[0, 'auto']} label={{ value: 'melanopic EDI (lx)', angle: -90, position: 'insideLeft', style: { textAnchor: 'middle', fill: AXIS_INK, fontSize: 10 } }} />
+        <YAxis tick={TICK} width={52} domain={[0, top]} allowDataOverflow label={{ value: 'melanopic EDI (lx)', angle: -90, position: 'insideLeft', style: { textAnchor: 'middle', fill: AXIS_INK, fontSize: 10 } }} />
         <Legend wrapperStyle={LEGEND_STYLE} iconSize={9} />
         {run.light.sources.map((s) => (
           <Area key={s.id} type="stepAfter" dataKey={s.id} name={s.label} stackId="light" stroke={SOURCE_KIND_COLOURS[s.kind]} fill={SOURCE_KIND_COLOURS[s.kind]} fillOpacity={0.55} isAnimationActive={false} dot={false} />
@@ -38,7 +56,7 @@ export function PrintLightChart({ run, day, title }: { run: RunView; day: number
         ))}
       </ComposedChart>
       <p className="chart-note">
-        Shaded: day, evening (3 h before sleep) and night. Dashed lines: recommended melanopic EDI at the eye — at least {RECOMMENDED_DAY_MIN_LX} lx by day, at most {RECOMMENDED_EVENING_MAX_LX} lx in the evening, at most {RECOMMENDED_NIGHT_MAX_LX} lx during sleep (Brown et al. 2022).
+        {cut ? `Peaks above ${top} lx are cut off (highest ${Math.round(auto.peak)} lx, usually outdoors). ` : ''}Shaded: day, evening (3 h before sleep) and night. Dashed lines: recommended melanopic EDI at the eye — at least {RECOMMENDED_DAY_MIN_LX} lx by day, at most {RECOMMENDED_EVENING_MAX_LX} lx in the evening, at most {RECOMMENDED_NIGHT_MAX_LX} lx during sleep (Brown et al. 2022).
       </p>
     </figure>
   );
@@ -109,6 +127,31 @@ export function PrintKssChart({ runs, strategies, day, dayLabel }: { runs: reado
           <Line key={s.id} dataKey={s.id} name={s.name} stroke={seriesColour(i)} strokeDasharray={seriesDash(i)} strokeWidth={1.8} dot={{ r: 1.5 }} isAnimationActive={false} />
         ))}
       </LineChart>
+    </figure>
+  );
+}
+
+/** Melatonin suppression per night, one line per strategy (nights by the local date of melatonin onset). */
+export function PrintSuppressionChart({ view, strategies, nights }: { view: ResultsView; strategies: readonly NamedItem[]; nights: ReadonlyMap<string, readonly { day: number; pct: number | null }[]> }) {
+  const rows = Array.from({ length: view.days }, (_, day) => {
+    const row: Record<string, number | null> = { day };
+    for (const s of strategies) row[s.id] = nights.get(s.id)?.find((n) => n.day === day)?.pct ?? null;
+    return row;
+  });
+  const stride = view.days > 10 ? 2 : 1;
+  return (
+    <figure className="chart">
+      <figcaption className="chart-title">Melatonin suppression by light, night by night</figcaption>
+      <LineChart width={CHART_WIDTH_PX} height={190} data={rows} margin={{ top: 8, right: 16, bottom: 0, left: 4 }}>
+        <CartesianGrid stroke={GRID} />
+        <XAxis dataKey="day" tick={TICK} interval={stride - 1} tickFormatter={(d: number) => formatDayLabel(view.startDate, d)} />
+        <YAxis tick={TICK} width={52} domain={[0, 100]} ticks={[0, 25, 50, 75, 100]} label={{ value: 'suppression (%)', angle: -90, position: 'insideLeft', style: { textAnchor: 'middle', fill: AXIS_INK, fontSize: 10 } }} />
+        <Legend wrapperStyle={LEGEND_STYLE} iconSize={9} />
+        {strategies.map((s, i) => (
+          <Line key={s.id} dataKey={s.id} name={s.name} stroke={seriesColour(i)} strokeDasharray={seriesDash(i)} strokeWidth={1.8} dot={{ r: 2 }} connectNulls isAnimationActive={false} />
+        ))}
+      </LineChart>
+      <p className="chart-note">Each night: modelled melatonin with the night’s light against the same night in darkness (100 % = fully suppressed). Lower is kinder to sleep.</p>
     </figure>
   );
 }

@@ -65,7 +65,12 @@ export function Cover({ doc, facts }: { doc: BriefingDocument; facts: ScenarioFa
   );
 }
 
-const signed = (v: number | null, decimals: number, unit: string) => (v === null ? '—' : `${v > 0 ? '+' : v < 0 ? '−' : ''}${formatNumber(Math.abs(v), decimals)} ${unit}`);
+/** A shift with + = earlier (advance) in words: "0.4 h earlier", "1.0 h later", "no shift". */
+export function shiftWords(advance_h: number | null): string {
+  if (advance_h === null) return '—';
+  if (Math.abs(advance_h) < 0.05) return 'no shift';
+  return `${formatNumber(Math.abs(advance_h), 1)} h ${advance_h > 0 ? 'earlier' : 'later'}`;
+}
 const percent = (v: number | null) => (v === null ? '—' : `${formatNumber(v, 0)} %`);
 
 function HeadlineTable({ summary }: { summary: PersonaSummary }) {
@@ -75,8 +80,8 @@ function HeadlineTable({ summary }: { summary: PersonaSummary }) {
       <thead>
         <tr>
           <th>Strategy</th>
-          <th className="num">Phase shift vs baseline (DLMO, + = earlier)</th>
-          <th className="num">Evening melatonin suppression</th>
+          <th className="num">Body-clock shift vs baseline ({summary.phaseMarker})</th>
+          <th className="num">Melatonin suppression per night</th>
           <th className="num">{summary.basis === 'work' ? 'Work hours' : 'Waking hours'} at KSS ≥ 7</th>
         </tr>
       </thead>
@@ -87,7 +92,7 @@ function HeadlineTable({ summary }: { summary: PersonaSummary }) {
               {h.strategy.name}
               {isRec(h) && <span className="tag">recommended</span>}
             </td>
-            <td className="num">{h === summary.baseline ? 'reference' : signed(h.phaseShift_h, 1, 'h')}</td>
+            <td className="num">{h === summary.baseline ? 'reference' : shiftWords(h.phaseShift_h)}</td>
             <td className="num">{percent(h.suppression_pct)}</td>
             <td className="num">{percent(h.sleepyShare_pct)}</td>
           </tr>
@@ -97,7 +102,7 @@ function HeadlineTable({ summary }: { summary: PersonaSummary }) {
   );
 }
 
-export function Summary({ summaries }: { summaries: readonly PersonaSummary[] }) {
+export function Summary({ summaries, warnings }: { summaries: readonly PersonaSummary[]; warnings: readonly string[] }) {
   return (
     <Section id="summary" title="Summary">
       <CautionsBox />
@@ -105,6 +110,7 @@ export function Summary({ summaries }: { summaries: readonly PersonaSummary[] })
         <div key={s.persona.id} className="persona-summary keep">
           <h3>{s.persona.name}</h3>
           <p className="recommendation">{s.sentences.recommendation}</p>
+          {s.sentences.reason !== '' && <p>{s.sentences.reason}</p>}
           <ul className="headlines">
             <li>{s.sentences.phase}</li>
             <li>{s.sentences.suppression}</li>
@@ -113,9 +119,17 @@ export function Summary({ summaries }: { summaries: readonly PersonaSummary[] })
           <HeadlineTable summary={s} />
         </div>
       ))}
-      <p className="small muted">
-        How the recommendation is chosen: the strategy with the lowest share of sleepy {summaries.some((s) => s.basis === 'work') ? 'work' : 'waking'} hours (KSS ≥ 7); within half a percentage point, the one with less evening melatonin suppression. A strategy is recommended over the baseline only when it is better on one of these two and not worse on the other. Phase shifts are reported, not scored: whether earlier or later is better depends on the person’s hours.
-      </p>
+      <p className="small muted">How the recommendation is chosen: {summaries[0]?.rule ?? ''} Body-clock shifts are reported, not scored: whether earlier or later is better depends on the person’s hours.</p>
+      {warnings.length > 0 && (
+        <div className="keep">
+          <h4>Notes from the run</h4>
+          <ul className="small">
+            {warnings.map((w) => (
+              <li key={w}>{w}</li>
+            ))}
+          </ul>
+        </div>
+      )}
     </Section>
   );
 }
@@ -203,10 +217,19 @@ export function CohortSection({ doc, view }: { doc: BriefingDocument; view: Resu
   );
 }
 
-export function Methods({ records }: { records: readonly ValidationRecordSummary[] }) {
+export function Methods({ records, runModels }: { records: readonly ValidationRecordSummary[]; runModels: Readonly<Record<string, string>> | null }) {
   return (
     <Section id="methods" title="Methods and assumptions">
       <h3>Models</h3>
+      {runModels !== null && (
+        <p className="small">
+          Used in this run:{' '}
+          {Object.entries(runModels)
+            .map(([k, v]) => `${k.replace(/_/g, ' ')}: ${v}`)
+            .join('; ')}
+          .
+        </p>
+      )}
       <table className="data keep small-table">
         <thead>
           <tr>
