@@ -49,10 +49,26 @@ export function pacemakerFor(persona: Persona, modelId: PacemakerId = DEFAULT_PA
   return createPacemaker(modelId, { tau_h: persona.intrinsicPeriod_h, lightSensitivity: persona.lightSensitivity });
 }
 
-/** Entrained state from the first 24 h of light and sleep, repeated. */
+const entrainCache = new Map<string, SimState>();
+
+/** Forget cached entrained states (benchmarks measure runs without them). */
+export function clearEntrainCache(): void {
+  entrainCache.clear();
+}
+
+/** Entrained state from the first 24 h of light and sleep, repeated (cached by model, person and that day). */
 export function entrainedStart(model: Pacemaker, light: LightSeries, sleep: SleepSpec): SimState {
   const daySleep: SleepSpec = sleep.mode === 'prescribed' ? { mode: 'prescribed', episodes: dailySleepPattern(sleep.episodes) } : sleep;
-  return entrain({ model, light, sleep: daySleep }).state;
+  let k = 0;
+  while (k < light.start_h.length && (light.start_h[k] ?? 0) < 24) k++;
+  const key = JSON.stringify([model.id, model.tau_h, model.lightSensitivity, daySleep, Array.from(light.start_h.subarray(0, k)), Array.from(light.level.subarray(0, k)), light.level[k] ?? null]);
+  let state = entrainCache.get(key);
+  if (state === undefined) {
+    state = entrain({ model, light, sleep: daySleep }).state;
+    if (entrainCache.size >= 64) entrainCache.clear();
+    entrainCache.set(key, state);
+  }
+  return state;
 }
 
 export function runBodyClockFor(model: Pacemaker, mel_lx: Float64Array, sleep: SleepSpec, initial: SimState | undefined, total_min: number): { outcome: BodyClockOutcome; run: SimulationRun; light: LightSeries } {

@@ -16,8 +16,7 @@ import type { MinuteLightSeries } from '../lightlog/log-to-minutes.js';
 
 import type { Luminaire, Persona, Place, Room, Scenario, Screen } from '../schema/scenario-types.js';
 import { clockWindowHolds, exposureContext } from '../timeline/exposure-context.js';
-import type { ExposureSlice, ExposureTimeline } from '../timeline/exposure-types.js';
-import { sliceIndexPerMinute } from '../timeline/timeline-sampling.js';
+import type { ExposureTimeline } from '../timeline/exposure-types.js';
 import type { LocalClock } from './local-clock.js';
 import { luminaireWeek } from './luminaire-levels.js';
 import type { OutdoorLight } from './outdoor-light.js';
@@ -45,7 +44,8 @@ export const STREET_LIGHT_CCT_K = 4000;
 
 /** Caches shared by the timelines of one run (and prepared rooms across runs). */
 export interface EyeCaches {
-  readonly daylight: Map<string, { photopic: Float64Array; mel: Float64Array }>;
+  /** Identifies the outdoor conditions of the run (site, weather, period) for the room cache. */
+  readonly weatherKey: string;
   /** Per-minute daylight melanopic DER × lens factor and lens factor, by observer age. */
   readonly daylightFactors: Map<number, { mel: Float32Array; lens: Float32Array }>;
 }
@@ -100,33 +100,71 @@ function subConditions(c: OutdoorConditions, a: number, b: number): OutdoorCondi
   };
 }
 
-/** Daylight at the eye in one room with one gaze for the minutes marked in `occupied` (reference observer, no eyewear). */
+/** Warm-up before the first occupied minute of a day for blinds with a memory (auto-solar), min. */
+const BLIND_WARMUP_MIN = 60;
+
+/** Room daylight kept across runs (the app reruns after each edit); keyed by scene, weather and occupancy. */
+const roomDaylightCache = new Map<string, { photopic: Float64Array; mel: Float64Array }>();
+const ROOM_DAYLIGHT_CACHE_LIMIT = 96;
+
+/** Forget cached rooms and daylight (benchmarks measure runs without them). */
+export function clearEyeCaches(): void {
+  roomDaylightCache.clear();
+  preparedRooms.clear();
+}
+
+/**
+ * Daylight at the eye in one room with one gaze at the minutes marked in `occupied` (reference
+ * observer, no eyewear). Evaluated per local day from the first to the last occupied minute
+ * (from BLIND_WARMUP_MIN earlier for automatic blinds): the first minute of each span is the
+ * day's arrival, which is what the manual blinds rule needs, and the other rules keep no memory.
+ */
 function roomDaylight(room: Room, gaze_deg: number, occupied: Uint8Array, scenario: Scenario, outdoor: OutdoorLight, clock: LocalClock, night: NightBlinds, caches: EyeCaches): { photopic: Float64Array; mel: Float64Array } {
-  const arrivalMatters = room.blinds.rule === 'manual-sun';
-  const sceneKey = JSON.stringify([room.width_m, room.depth_m, room.height_m, room.reflectances, room.windows, room.blinds, room.viewingPosition ?? null, Math.round(gaze_deg), scenario.site.ground]);
-  let occKey = '';
-  if (arrivalMatters) {
-    const edges: number[] = [];
-    for (let m = 0; m < occupied.length; m++) if ((occupied[m] ?? 0) !== (m === 0 ? 0 : (occupied[m - 1] ?? 0))) edges.push(m);
-    occKey = edges.join(',');
-  }
-  const key = `${sceneKey}|${occKey}`;
-  const hit = caches.daylight.get(key);
+  const sceneKey = JSON.stringify([room.width_m, room.depth_m, room.height_m, room.reflectances, room.windows, room.blinds, room.viewingPosition ?? null, Math.round(gaze_deg), scenario.site.ground, night]);
+  const edges: number[] = [];
+  for (let m = 0; m < occupied.length; m++) if ((occupied[m] ?? 0) !== (m === 0 ? 0 : (occupied[m - 1] ?? 0))) edges.push(m);
+  const key = `${caches.weatherKey}|${sceneKey}|${edges.join(',')}`;
+  const hit = roomDaylightCache.get(key);
   if (hit !== undefined) return hit;
   const n = clock.total_min;
   const prep = prepared(sceneKey, () => prepareRoom(roomScene(room, gaze_deg, night, { reflectance: scenario.site.ground.reflectance, snowReflectance: scenario.site.ground.snow.reflectance })));
   const photopic = new Float64Array(n);
   const mel = new Float64Array(n);
   const place = new Uint8Array(n);
-  for (let m = 0; m < n; m++) place[m] = arrivalMatters ? ((occupied[m] ?? 0) === 1 ? PLACE_ROOM : PLACE_ELSEWHERE) : PLACE_ROOM;
+  for (let m = 0; m < n; m++) place[m] = (occupied[m] ?? 0) === 1 ? PLACE_ROOM : PLACE_ELSEWHERE;
+  const warmup = room.blinds.rule === 'auto-solar' ? BLIND_WARMUP_MIN : 0;
+  const dhi = outdoor.conditions.diffuseHorizontal_lx;
   for (const ch of clock.chunks) {
-    const cols = evaluateEyeLight(prep, subConditions(outdoor.conditions, ch.start, ch.end), { startMinuteOfDay: clock.minuteOfDay[ch.start] ?? 0, place: place.subarray(ch.start, ch.end) });
-    photopic.set(cols.bySource.daylight.photopic_lx, ch.start);
-    mel.set(cols.bySource.daylight.mel_edi_lx, ch.start);
+    // From the day's first occupied minute (its arrival) to the last occupied minute with daylight.
+    let first = -1;
+    let last = -1;
+    for (let m = ch.start; m < ch.end; m++) {
+      if (occupied[m] !== 1) continue;
+      if (first < 0) first = m;
+      if ((dhi[m] ?? 0) > 0) last = m;
+    }
+    if (last < 0) continue;
+    const a = Math.max(ch.start, first - warmup);
+    const b = last + 1;
+    const cols = evaluateEyeLight(prep, subConditions(outdoor.conditions, a, b), { startMinuteOfDay: clock.minuteOfDay[a] ?? 0, place: place.subarray(a, b) });
+    photopic.set(cols.bySource.daylight.photopic_lx, a);
+    mel.set(cols.bySource.daylight.mel_edi_lx, a);
   }
   const out = { photopic, mel };
-  caches.daylight.set(key, out);
+  if (roomDaylightCache.size >= ROOM_DAYLIGHT_CACHE_LIMIT) roomDaylightCache.delete(roomDaylightCache.keys().next().value ?? '');
+  roomDaylightCache.set(key, out);
   return out;
+}
+
+const screenLuxCache = new Map<string, number>();
+function screenEye_lx(s: Screen, brightness: number): number {
+  const key = `${s.luminance_cd_m2 * brightness}|${s.width_m}|${s.height_m}|${s.distance_m}`;
+  let v = screenLuxCache.get(key);
+  if (v === undefined) {
+    v = screenEyeIlluminance_lx(s.luminance_cd_m2 * brightness, s.width_m, s.height_m, s.distance_m);
+    if (screenLuxCache.size < 1024) screenLuxCache.set(key, v);
+  }
+  return v;
 }
 
 const nightCache = new WeakMap<Screen, Uint8Array>();
@@ -140,21 +178,6 @@ function nightMinutes(s: Screen): Uint8Array {
     nightCache.set(s, a);
   }
   return a;
-}
-
-const screenLux = new WeakMap<Screen, Map<number, number>>();
-function screenEye_lx(s: Screen, brightness: number): number {
-  let m = screenLux.get(s);
-  if (m === undefined) {
-    m = new Map();
-    screenLux.set(s, m);
-  }
-  let v = m.get(brightness);
-  if (v === undefined) {
-    v = screenEyeIlluminance_lx(s.luminance_cd_m2 * brightness, s.width_m, s.height_m, s.distance_m);
-    m.set(brightness, v);
-  }
-  return v;
 }
 
 export interface EyeSeriesInput {
@@ -174,7 +197,6 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
   const age = persona.age_y;
   const melBySource = { daylight: new Float64Array(n), electric: new Float64Array(n), screen: new Float64Array(n), outdoor: new Float64Array(n), measured: new Float64Array(n) };
   const photopic = new Float64Array(n);
-  const sliceOf = sliceIndexPerMinute(timeline);
   const places = new Map<string, Place>(variant.places.map((p) => [p.id, p]));
   const slices = timeline.slices;
   const sunElevation = outdoor.series.sun.elevation_deg;
@@ -230,76 +252,77 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
     }
     return night ? v[1] : v[0];
   };
-  let contextSlice: ExposureSlice | undefined;
-  let context: ReturnType<typeof exposureContext> | undefined;
-  for (let m = 0; m < n; m++) {
-    const s = slices[sliceOf[m] ?? 0] as ExposureSlice;
-    const minuteOfDay = clock.minuteOfDay[m] ?? 0;
-    if (s !== contextSlice) {
-      contextSlice = s;
-      context = exposureContext(variant, persona, s, minuteOfDay);
+  const lumWeeks = new Map<Luminaire, ReturnType<typeof luminaireWeek>>();
+  const weekOf = (l: Luminaire) => {
+    let w = lumWeeks.get(l);
+    if (w === undefined) {
+      w = luminaireWeek(l);
+      lumWeeks.set(l, w);
     }
-    const ctx = context as NonNullable<typeof context>;
+    return w;
+  };
+  for (const s of slices) {
+    const ctx = exposureContext(variant, persona, s, clock.minuteOfDay[s.start_min] ?? 0);
     const place = ctx.place;
-    const day = timeline.days[clock.dayIndex[m] ?? 0];
-    const weekday = day?.weekday ?? 'mon';
-    const dayMel = dayFactor.mel[m] ?? 1;
-    const dayLens = dayFactor.lens[m] ?? 1;
-    let pDay = 0;
-    let mDay = 0;
-    let pEl = 0;
-    let mEl = 0;
-    let pOut = 0;
-    let mOut = 0;
-    const dark = (sunElevation[m] ?? 0) < ARTIFICIAL_OUTDOOR_BELOW_DEG;
-    if (place.kind === 'room') {
-      const k = roomAt[m] ?? -1;
-      const rd = k >= 0 ? roomDay[k] : undefined;
-      if (rd !== undefined) {
-        pDay = rd.photopic[m] ?? 0;
-        mDay = (rd.mel[m] ?? 0) * dayLens;
-      }
-      for (const l of place.luminaires) {
-        const wk = luminaireWeek(l);
-        const level = wk.level[weekday][minuteOfDay] ?? 0;
-        if (level <= 0) continue;
-        const lux = level * l.eyeIlluminance_lx;
-        pEl += lux;
-        mEl += lux * lumMelAt(l, wk.cct_K[weekday][minuteOfDay] ?? Number.NaN);
-      }
-    } else if (place.kind === 'vehicle') {
-      const lux = (outdoor.outdoorEye_lx[m] ?? 0) * VEHICLE_VIEW_FACTOR * place.windowTransmittance;
-      pDay = lux;
-      mDay = lux * dayMel;
-      if (dark && place.interiorIlluminance_lx > 0) {
-        pEl = place.interiorIlluminance_lx;
-        mEl = pEl * streetResp.melDer * streetResp.lensFactor;
-      }
-    } else {
-      const lux = (outdoor.outdoorEye_lx[m] ?? 0) * OUTDOOR_SHADE_FACTOR[place.shade];
-      pOut = lux;
-      mOut = lux * dayMel;
-      if (dark) {
-        pOut += place.streetLighting_lx;
-        mOut += place.streetLighting_lx * streetResp.melDer * streetResp.lensFactor;
-      }
-    }
-    let pScr = 0;
-    let mScr = 0;
-    if (ctx.screen !== null) {
-      const night = nightMinutes(ctx.screen)[minuteOfDay] === 1;
-      pScr = screenEye_lx(ctx.screen, s.screenBrightness);
-      mScr = pScr * scrMelAt(ctx.screen, night);
-    }
     const pT = ctx.eyewear?.photopicTransmittance ?? 1;
     const mT = ctx.eyewear?.melanopicTransmittance ?? 1;
-    let p = (pDay + pEl + pOut + pScr) * pT;
-    melBySource.daylight[m] = mDay * mT;
-    melBySource.electric[m] = mEl * mT;
-    melBySource.screen[m] = mScr * mT;
-    melBySource.outdoor[m] = mOut * mT;
-    if (s.measuredLogId !== null) {
-      const log = inp.logs.get(s.measuredLogId);
+    const scr = ctx.screen;
+    const scrLux = scr === null ? 0 : screenEye_lx(scr, s.screenBrightness);
+    const scrNight = scr === null ? undefined : nightMinutes(scr);
+    const scrMelDay = scr === null ? 0 : scrMelAt(scr, false);
+    const scrMelNight = scr === null ? 0 : scrMelAt(scr, true);
+    const lums = place.kind === 'room' ? place.luminaires.map((l) => ({ l, w: weekOf(l) })) : [];
+    const log = s.measuredLogId !== null ? inp.logs.get(s.measuredLogId) : undefined;
+    for (let m = s.start_min; m < s.end_min; m++) {
+      const minuteOfDay = clock.minuteOfDay[m] ?? 0;
+      const dayMel = dayFactor.mel[m] ?? 1;
+      let pDay = 0;
+      let mDay = 0;
+      let pEl = 0;
+      let mEl = 0;
+      let pOut = 0;
+      let mOut = 0;
+      const dark = (sunElevation[m] ?? 0) < ARTIFICIAL_OUTDOOR_BELOW_DEG;
+      if (place.kind === 'room') {
+        const k = roomAt[m] ?? -1;
+        const rd = k >= 0 ? roomDay[k] : undefined;
+        if (rd !== undefined) {
+          pDay = rd.photopic[m] ?? 0;
+          mDay = (rd.mel[m] ?? 0) * (dayFactor.lens[m] ?? 1);
+        }
+        if (lums.length > 0) {
+          const weekday = timeline.days[clock.dayIndex[m] ?? 0]?.weekday ?? 'mon';
+          for (const { l, w } of lums) {
+            const level = w.level[weekday][minuteOfDay] ?? 0;
+            if (level <= 0) continue;
+            const lux = level * l.eyeIlluminance_lx;
+            pEl += lux;
+            mEl += lux * lumMelAt(l, w.cct_K[weekday][minuteOfDay] ?? Number.NaN);
+          }
+        }
+      } else if (place.kind === 'vehicle') {
+        const lux = (outdoor.outdoorEye_lx[m] ?? 0) * VEHICLE_VIEW_FACTOR * place.windowTransmittance;
+        pDay = lux;
+        mDay = lux * dayMel;
+        if (dark && place.interiorIlluminance_lx > 0) {
+          pEl = place.interiorIlluminance_lx;
+          mEl = pEl * streetResp.melDer * streetResp.lensFactor;
+        }
+      } else {
+        const lux = (outdoor.outdoorEye_lx[m] ?? 0) * OUTDOOR_SHADE_FACTOR[place.shade];
+        pOut = lux;
+        mOut = lux * dayMel;
+        if (dark) {
+          pOut += place.streetLighting_lx;
+          mOut += place.streetLighting_lx * streetResp.melDer * streetResp.lensFactor;
+        }
+      }
+      const mScr = scrNight === undefined ? 0 : scrLux * (scrNight[minuteOfDay] === 1 ? scrMelNight : scrMelDay);
+      let p = (pDay + pEl + pOut + scrLux) * pT;
+      melBySource.daylight[m] = mDay * mT;
+      melBySource.electric[m] = mEl * mT;
+      melBySource.screen[m] = mScr * mT;
+      melBySource.outdoor[m] = mOut * mT;
       if (log !== undefined && log.measured[m] === 1) {
         const modelMel = (mDay + mEl + mOut + mScr) * mT;
         const ratio = p > 0 ? modelMel / p : 1;
@@ -313,8 +336,8 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
         melBySource.outdoor[m] = 0;
         melBySource.measured[m] = Math.max(0, mel);
       }
+      photopic[m] = p;
     }
-    photopic[m] = p;
   }
   const total = new Float64Array(n);
   for (let m = 0; m < n; m++) total[m] = (melBySource.daylight[m] ?? 0) + (melBySource.electric[m] ?? 0) + (melBySource.screen[m] ?? 0) + (melBySource.outdoor[m] ?? 0) + (melBySource.measured[m] ?? 0);

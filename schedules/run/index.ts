@@ -6,3 +6,13 @@ export { LIGHT_SOURCES, type LightSource, type EyeSeries } from './eye-series.js
 export { exposureCsv, summaryCsv, EXPOSURE_STEP_MIN } from './results-csv.js';
 export { RECOMMENDATION_RULE } from './recommend.js';
 export type { WeatherText } from './outdoor-light.js';
+
+import { clearEntrainCache } from './body-clock-run.js';
+import { clearEyeCaches } from './eye-series.js';
+import { clearOutdoorCache } from './outdoor-light.js';
+/** Forget every cache the pipeline keeps between runs (prepared rooms, room daylight, outdoor daylight, entrained states). */
+export function clearPipelineCaches(): void {
+  clearEntrainCache();
+  clearEyeCaches();
+  clearOutdoorCache();
+}

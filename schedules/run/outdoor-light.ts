@@ -15,6 +15,8 @@ import { RunInputError } from './run-input-error.js';
 import { skyConditionForDay } from './sky-days.js';
 
 export interface OutdoorLight {
+  /** Identifies site, weather and period (for caches). */
+  readonly key: string;
   readonly series: DaylightSeries;
   readonly conditions: OutdoorConditions;
   /** Vertical eye illuminance outdoors in the open (lx). */
@@ -39,7 +41,66 @@ function standardOffset_h(zone: string, year: number): number {
  * `needsOutdoorEye` marks the minutes at which someone is outdoors or in a vehicle; the outdoor
  * eye illuminance is computed there only (0 elsewhere) — all minutes when absent.
  */
+/** FNV-1a 32-bit hash of a text (cache keys only). */
+function textHash(text: string): string {
+  let h = 0x811c9dc5;
+  for (let i = 0; i < text.length; i++) {
+    h ^= text.charCodeAt(i);
+    h = Math.imul(h, 0x01000193);
+  }
+  return (h >>> 0).toString(16);
+}
+
+interface CachedDaylight {
+  readonly base: Omit<OutdoorLight, 'outdoorEye_lx'>;
+  /** Outdoor eye illuminance, NaN where not computed yet. */
+  readonly eye_lx: Float64Array;
+  readonly month: Uint8Array;
+}
+const daylightCache = new Map<string, CachedDaylight>();
+
+/** Forget cached outdoor daylight (benchmarks measure runs without it). */
+export function clearOutdoorCache(): void {
+  daylightCache.clear();
+}
+
 export function outdoorLight(scenario: Scenario, timeline: ExposureTimeline, weather: WeatherText | undefined, needsOutdoorEye?: Uint8Array): OutdoorLight {
+  const site = scenario.site;
+  const key = JSON.stringify([site, timeline.runStartUtc_ms, timeline.total_min, weather === undefined ? null : [weather.fileName, weather.text.length, textHash(weather.text)]]);
+  let cached = daylightCache.get(key);
+  if (cached === undefined) {
+    cached = computeDaylight(scenario, timeline, weather, key);
+    if (daylightCache.size >= 4) daylightCache.clear();
+    daylightCache.set(key, cached);
+  }
+  const { base, eye_lx, month } = cached;
+  const series = base.series;
+  const snowMonths = new Set(site.ground.snow.months);
+  const out = new Float64Array(timeline.total_min);
+  for (let i = 0; i < out.length; i++) {
+    if (needsOutdoorEye !== undefined && needsOutdoorEye[i] !== 1) continue;
+    if (!((series.diffuseHorizontal_lx[i] ?? 0) > 0 || (series.directNormal_lx[i] ?? 0) > 0)) continue;
+    if (Number.isNaN(eye_lx[i])) {
+      eye_lx[i] = outdoorEyeIlluminance({
+        sunZenith_deg: series.sun.zenith_deg[i] as number,
+        sunAzimuth_deg: series.sun.azimuth_deg[i] as number,
+        directNormal_lx: series.directNormal_lx[i] as number,
+        diffuseHorizontal_lx: series.diffuseHorizontal_lx[i] as number,
+        globalHorizontal_lx: series.globalHorizontal_lx[i] as number,
+        groundReflectance: snowMonths.has(month[i] as number) && site.weather.kind === 'sky-model' ? site.ground.snow.reflectance : groundReflectanceWithSnow(site.ground.reflectance, series.snowDepth_cm[i] as number, series.daysSinceSnowfall[i] as number),
+        gazeAzimuth_deg: 'all-directions',
+        gazeTilt_deg: 90,
+        skyModel: 'perez',
+        clearness: series.clearness[i] as number,
+        brightness: series.brightness[i] as number,
+      }).total_lx;
+    }
+    out[i] = eye_lx[i] as number;
+  }
+  return { ...base, outdoorEye_lx: out };
+}
+
+function computeDaylight(scenario: Scenario, timeline: ExposureTimeline, weather: WeatherText | undefined, key: string): CachedDaylight {
   const site = scenario.site;
   const window = { startEpochMs: timeline.runStartUtc_ms, step_min: 1, count: timeline.total_min };
   let series: DaylightSeries;
@@ -71,27 +132,9 @@ export function outdoorLight(scenario: Scenario, timeline: ExposureTimeline, wea
   const snowMonths = new Set(site.ground.snow.months);
   const month = new Uint8Array(timeline.total_min);
   for (const d of timeline.days) month.fill(Number(d.date.slice(5, 7)), d.start_min, d.start_min + d.length_min);
-  const eye_lx = new Float64Array(timeline.total_min);
-  for (let i = 0; i < eye_lx.length; i++) {
-    if (needsOutdoorEye !== undefined && needsOutdoorEye[i] !== 1) continue;
-    if (!((series.diffuseHorizontal_lx[i] ?? 0) > 0 || (series.directNormal_lx[i] ?? 0) > 0)) continue;
-    eye_lx[i] = outdoorEyeIlluminance({
-      sunZenith_deg: series.sun.zenith_deg[i] as number,
-      sunAzimuth_deg: series.sun.azimuth_deg[i] as number,
-      directNormal_lx: series.directNormal_lx[i] as number,
-      diffuseHorizontal_lx: series.diffuseHorizontal_lx[i] as number,
-      globalHorizontal_lx: series.globalHorizontal_lx[i] as number,
-      groundReflectance: snowMonths.has(month[i] as number) && site.weather.kind === 'sky-model' ? site.ground.snow.reflectance : groundReflectanceWithSnow(site.ground.reflectance, series.snowDepth_cm[i] as number, series.daysSinceSnowfall[i] as number),
-      gazeAzimuth_deg: 'all-directions',
-      gazeTilt_deg: 90,
-      skyModel: 'perez',
-      clearness: series.clearness[i] as number,
-      brightness: series.brightness[i] as number,
-    }).total_lx;
-  }
   const conditions = outdoorConditionsFromDaylightSeries(series, month);
   // Snow cover from the month list when the weather has no snow depth.
   const snowOnGround = conditions.snowOnGround ?? new Uint8Array(timeline.total_min);
   if (site.weather.kind === 'sky-model' || !site.weather.snowFromFile) for (let i = 0; i < month.length; i++) snowOnGround[i] = snowMonths.has(month[i] as number) ? 1 : 0;
-  return { series, conditions: { ...conditions, snowOnGround }, outdoorEye_lx: eye_lx, skyByDay, filledHours };
+  return { base: { key, series, conditions: { ...conditions, snowOnGround }, skyByDay, filledHours }, eye_lx: new Float64Array(timeline.total_min).fill(Number.NaN), month };
 }

@@ -103,7 +103,7 @@ export function runScenario(input: RunInput): RunOutput {
   if (outdoor.filledHours > 0) warnings.push(`weather file: ${outdoor.filledHours} hour(s) with missing values were filled from a neighbour`);
   const logs = importLogs(scenario, first, input.lightLogTexts ?? {}, warnings);
   const night = nightBlinds(scenario, first);
-  const caches: EyeCaches = { daylight: new Map(), daylightFactors: new Map() };
+  const caches: EyeCaches = { weatherKey: outdoor.key, daylightFactors: new Map() };
   const wanted = input.personaIds === undefined ? undefined : new Set(input.personaIds);
   const light: TimelineLight[] = [];
 

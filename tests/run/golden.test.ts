@@ -42,6 +42,7 @@ function close(actual: unknown, expected: unknown, path: string, tol: number): v
 }
 
 function tolFor(key: string, value: number): number {
+  if (key.includes('_lx') || key.includes('hours') || key.startsWith('nights')) return Math.max(1e-9, Math.abs(value) * TOL.relative);
   if (key.endsWith('_h')) return TOL.time_h;
   if (key.endsWith('_pct')) return TOL.pct;
   if (key.endsWith('_share')) return TOL.share;
