@@ -107,11 +107,13 @@ export function Summary({ summaries, warnings }: { summaries: readonly PersonaSu
     <Section id="summary" title="Summary">
       <CautionsBox />
       {summaries.map((s) => (
-        <div key={s.persona.id} className="persona-summary keep">
-          <h3>{s.persona.name}</h3>
-          <p className="recommendation">{s.sentences.recommendation}</p>
-          {s.sentences.reason !== '' && <p>{s.sentences.reason}</p>}
-          <ul className="headlines">
+        <div key={s.persona.id} className="persona-summary">
+          <div className="keep">
+            <h3>{s.persona.name}</h3>
+            <p className="recommendation">{s.sentences.recommendation}</p>
+            {s.sentences.reason !== '' && <p>{s.sentences.reason}</p>}
+          </div>
+          <ul className="headlines keep">
             <li>{s.sentences.phase}</li>
             <li>{s.sentences.suppression}</li>
             <li>{s.sentences.sleepiness}</li>
