@@ -8,7 +8,7 @@ import { kssColour } from '../../../src/charts/palette.js';
 import { bandCompliance, lightAtEyeRows, recommendationBands } from '../../../src/charts/light-at-eye-data.js';
 import { formatClock, formatDayLabel } from '../../../src/charts/clock.js';
 import type { PersonaSummary } from '../headlines.js';
-import { lightAxisTop_lx, PrintKssChart, PrintLightChart, PrintMelatoninChart, PrintPhaseChart, PrintSuppressionChart } from './print-charts.js';
+import { lightAxisTop_lx, PrintKssChart, PrintLightChart, PrintLightCompareChart, PrintMelatoninChart, PrintPhaseChart, PrintSuppressionChart } from './print-charts.js';
 import { Section } from './sections.js';
 
 const BAND_WORDS = { day: 'day (≥ 250 lx)', evening: 'evening (≤ 10 lx)', night: 'night (≤ 1 lx)' } as const;
@@ -64,6 +64,13 @@ function KssGridTable({ view, personaId, strategyId }: { view: ResultsView; pers
   );
 }
 
+/** "+1.2", "−0.4", or "±0" when the difference rounds to zero at the shown decimals. */
+export function signedDifference(difference: number, decimals: number): string {
+  const text = formatNumber(Math.abs(difference), decimals);
+  if (/^0(\.0*)?$/.test(text)) return `±${text}`;
+  return `${difference > 0 ? '+' : '−'}${text}`;
+}
+
 function MetricsTable({ view, personaId }: { view: ResultsView; personaId: string }) {
   const runs = view.runs.filter((r) => r.personaId === personaId);
   const strategies = view.strategies.filter((s) => runs.some((r) => r.strategyId === s.id));
@@ -93,8 +100,7 @@ function MetricsTable({ view, personaId }: { view: ResultsView; personaId: strin
                 {c.difference !== null && (
                   <span className="diff">
                     {' '}
-                    ({c.difference > 0 ? '+' : c.difference < 0 ? '−' : '±'}
-                    {formatNumber(Math.abs(c.difference), row.decimals)})
+                    ({signedDifference(c.difference, row.decimals)})
                   </span>
                 )}
               </td>
@@ -129,6 +135,11 @@ export function PersonaResults({ view, summary, day, nightly }: { view: ResultsV
         <div className="keep">
           <PrintLightChart run={recRun} day={day} axisTop_lx={axisTop_lx} title={`Melanopic EDI at the eye by source on ${dayLabel} — ${rec.strategy.name}`} />
           <ComplianceLine view={view} personaId={personaId} strategyId={recRun.strategyId} day={day} />
+        </div>
+      )}
+      {recRun !== undefined && rec !== null && baseline !== undefined && (
+        <div className="keep">
+          <PrintLightCompareChart runs={[baseline, recRun]} names={['Baseline', rec.strategy.name]} day={day} title={`Total melanopic EDI on ${dayLabel}: baseline and ${rec.strategy.name} (log scale)`} />
         </div>
       )}
       <div className="keep">

@@ -155,3 +155,41 @@ export function PrintSuppressionChart({ view, strategies, nights }: { view: Resu
     </figure>
   );
 }
+
+/** Total melanopic EDI of two strategies on one day on a log axis, so evening and night levels show. */
+export function PrintLightCompareChart({ runs, names, day, title }: { runs: readonly RunView[]; names: readonly string[]; day: number; title: string }) {
+  const FLOOR_LX = 0.1;
+  const series = runs.map((r) => lightAtEyeRows(r.light, day, 10));
+  const rows = (series[0] ?? []).map((row, i) => {
+    const out: Record<string, number> = { clock_h: row.clock_h };
+    series.forEach((s, k) => {
+      out[`s${k}`] = Math.max(FLOOR_LX, s[i]?.total_lx ?? 0);
+    });
+    return out;
+  });
+  const bands = runs[0] === undefined ? [] : recommendationBands(runs[0].sleep, day);
+  const peak = Math.max(10, ...rows.flatMap((r) => runs.map((_, k) => r[`s${k}`] ?? 0)));
+  const top = 10 ** Math.ceil(Math.log10(peak));
+  const ticks = [0.1, 1, 10, 100, 1000, 10000, 100000].filter((t) => t <= top);
+  return (
+    <figure className="chart">
+      <figcaption className="chart-title">{title}</figcaption>
+      <LineChart width={CHART_WIDTH_PX} height={190} data={rows} margin={{ top: 8, right: 16, bottom: 0, left: 4 }}>
+        <CartesianGrid stroke={GRID} vertical={false} />
+        {bands.map((b, i) => (
+          <ReferenceArea key={`a${i}`} x1={b.from_h} x2={b.to_h} fill={BAND_COLOURS[b.kind]} fillOpacity={b.kind === 'night' ? 0.07 : 0.06} ifOverflow="hidden" />
+        ))}
+        <XAxis dataKey="clock_h" type="number" domain={[0, 24]} ticks={[0, 3, 6, 9, 12, 15, 18, 21, 24]} tick={TICK} tickFormatter={(h: number) => formatClock(h === 24 ? 0 : h)} />
+        <YAxis scale="log" domain={[FLOOR_LX, top]} ticks={ticks} allowDataOverflow tick={TICK} width={52} tickFormatter={(v: number) => (v >= 1000 ? `${v / 1000}k` : String(v))} label={{ value: 'melanopic EDI (lx, log)', angle: -90, position: 'insideLeft', style: { textAnchor: 'middle', fill: AXIS_INK, fontSize: 10 } }} />
+        <Legend wrapperStyle={LEGEND_STYLE} iconSize={9} />
+        {bands.map((b, i) => (
+          <ReferenceLine key={`l${i}`} segment={[{ x: b.from_h, y: b.limit_lx }, { x: b.to_h, y: b.limit_lx }]} stroke={BAND_COLOURS[b.kind]} strokeWidth={1.5} strokeDasharray={b.rule === 'at least' ? '6 3' : '2 3'} ifOverflow="hidden" />
+        ))}
+        {runs.map((r, k) => (
+          <Line key={r.strategyId} type="stepAfter" dataKey={`s${k}`} name={names[k] ?? r.strategyId} stroke={seriesColour(k === 0 ? 0 : 1)} strokeDasharray={k === 0 ? '' : '6 3'} strokeWidth={1.6} dot={false} isAnimationActive={false} />
+        ))}
+      </LineChart>
+      <p className="chart-note">All sources together, {(runs[0]?.light.step_h ?? 1) >= 1 ? 'hourly' : '10-minute'} means; values below {FLOOR_LX} lx are drawn at {FLOOR_LX} lx. Dashed band lines as above.</p>
+    </figure>
+  );
+}
