@@ -202,26 +202,22 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
   const sunElevation = outdoor.series.sun.elevation_deg;
 
   // Daylight in rooms: one evaluation per room and gaze direction.
-  const groups = new Map<string, { room: Room; gaze: number; occupied: Uint8Array }>();
-  slices.forEach((s) => {
+  const groups = new Map<string, { room: Room; gaze: number; occupied: Uint8Array; index: number }>();
+  const roomAt = new Int16Array(n).fill(-1);
+  for (const s of slices) {
     const p = places.get(s.placeId);
-    if (p === undefined || p.kind !== 'room' || p.windows.length === 0) return;
+    if (p === undefined || p.kind !== 'room' || p.windows.length === 0) continue;
     const gaze = s.gazeAzimuth_deg ?? defaultGazeAzimuth_deg(p, s.gaze);
     const key = `${p.id}|${Math.round(gaze)}`;
     let g = groups.get(key);
     if (g === undefined) {
-      g = { room: p, gaze, occupied: new Uint8Array(n) };
+      g = { room: p, gaze, occupied: new Uint8Array(n), index: groups.size };
       groups.set(key, g);
     }
     g.occupied.fill(1, s.start_min, s.end_min);
-  });
-  const roomAt = new Int16Array(n).fill(-1);
-  const roomDay: { photopic: Float64Array; mel: Float64Array }[] = [];
-  for (const g of groups.values()) {
-    const k = roomDay.length;
-    roomDay.push(roomDaylight(g.room, g.gaze, g.occupied, variant, outdoor, clock, inp.night, inp.caches));
-    for (let m = 0; m < n; m++) if (g.occupied[m] === 1) roomAt[m] = k;
+    roomAt.fill(g.index, s.start_min, s.end_min);
   }
+  const roomDay = [...groups.values()].map((g) => roomDaylight(g.room, g.gaze, g.occupied, variant, outdoor, clock, inp.night, inp.caches));
 
   const streetResp = electricResponse({ kind: 'cct', cct_K: STREET_LIGHT_CCT_K }, undefined, age);
   const dayFactor = daylightFactors(outdoor, age, inp.caches);
@@ -261,6 +257,7 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
     }
     return w;
   };
+  const { daylight: melDaylight, electric: melElectric, screen: melScreen, outdoor: melOutdoor } = melBySource;
   for (const s of slices) {
     const ctx = exposureContext(variant, persona, s, clock.minuteOfDay[s.start_min] ?? 0);
     const place = ctx.place;
@@ -272,6 +269,13 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
     const scrMelDay = scr === null ? 0 : scrMelAt(scr, false);
     const scrMelNight = scr === null ? 0 : scrMelAt(scr, true);
     const lums = place.kind === 'room' ? place.luminaires.map((l) => ({ l, w: weekOf(l) })) : [];
+    const nL = lums.length;
+    // Level and CCT arrays of each luminaire for the current day, and the last CCT's melanopic factor.
+    const levelToday: Float32Array[] = new Array<Float32Array>(nL);
+    const cctToday: Float32Array[] = new Array<Float32Array>(nL);
+    const lastCct = new Float64Array(nL).fill(-1);
+    const lastMel = new Float64Array(nL);
+    let today = -1;
     const log = s.measuredLogId !== null ? inp.logs.get(s.measuredLogId) : undefined;
     for (let m = s.start_min; m < s.end_min; m++) {
       const minuteOfDay = clock.minuteOfDay[m] ?? 0;
@@ -290,14 +294,29 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
           pDay = rd.photopic[m] ?? 0;
           mDay = (rd.mel[m] ?? 0) * (dayFactor.lens[m] ?? 1);
         }
-        if (lums.length > 0) {
-          const weekday = timeline.days[clock.dayIndex[m] ?? 0]?.weekday ?? 'mon';
-          for (const { l, w } of lums) {
-            const level = w.level[weekday][minuteOfDay] ?? 0;
+        if (nL > 0) {
+          const d = clock.dayIndex[m] ?? 0;
+          if (d !== today) {
+            today = d;
+            const weekday = timeline.days[d]?.weekday ?? 'mon';
+            for (let j = 0; j < nL; j++) {
+              const w = (lums[j] as (typeof lums)[number]).w;
+              levelToday[j] = w.level[weekday];
+              cctToday[j] = w.cct_K[weekday];
+            }
+          }
+          for (let j = 0; j < nL; j++) {
+            const level = (levelToday[j] as Float32Array)[minuteOfDay] ?? 0;
             if (level <= 0) continue;
+            const l = (lums[j] as (typeof lums)[number]).l;
             const lux = level * l.eyeIlluminance_lx;
+            const cct = (cctToday[j] as Float32Array)[minuteOfDay] ?? Number.NaN;
+            if (cct !== lastCct[j]) {
+              lastCct[j] = cct;
+              lastMel[j] = lumMelAt(l, cct);
+            }
             pEl += lux;
-            mEl += lux * lumMelAt(l, w.cct_K[weekday][minuteOfDay] ?? Number.NaN);
+            mEl += lux * (lastMel[j] as number);
           }
         }
       } else if (place.kind === 'vehicle') {
@@ -319,10 +338,10 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
       }
       const mScr = scrNight === undefined ? 0 : scrLux * (scrNight[minuteOfDay] === 1 ? scrMelNight : scrMelDay);
       let p = (pDay + pEl + pOut + scrLux) * pT;
-      melBySource.daylight[m] = mDay * mT;
-      melBySource.electric[m] = mEl * mT;
-      melBySource.screen[m] = mScr * mT;
-      melBySource.outdoor[m] = mOut * mT;
+      melDaylight[m] = mDay * mT;
+      melElectric[m] = mEl * mT;
+      melScreen[m] = mScr * mT;
+      melOutdoor[m] = mOut * mT;
       if (log !== undefined && log.measured[m] === 1) {
         const modelMel = (mDay + mEl + mOut + mScr) * mT;
         const ratio = p > 0 ? modelMel / p : 1;
@@ -330,10 +349,10 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
         const melLog = log.melanopicEdi_lx[m] ?? Number.NaN;
         const mel = Number.isFinite(melLog) ? melLog : Number.isFinite(lux) ? lux * ratio : 0;
         p = Number.isFinite(lux) ? lux : ratio > 0 ? mel / ratio : mel;
-        melBySource.daylight[m] = 0;
-        melBySource.electric[m] = 0;
-        melBySource.screen[m] = 0;
-        melBySource.outdoor[m] = 0;
+        melDaylight[m] = 0;
+        melElectric[m] = 0;
+        melScreen[m] = 0;
+        melOutdoor[m] = 0;
         melBySource.measured[m] = Math.max(0, mel);
       }
       photopic[m] = p;
