@@ -36,7 +36,9 @@ beforeAll(async () => {
   await writeBriefingPdf({ ...common, results, outPath: a4, paper: 'A4' });
   await writeBriefingPdf({ ...common, results, outPath: a4Again, paper: 'A4' });
   await writeBriefingPdf({ ...common, results, outPath: letter, paper: 'Letter' });
-  await writeBriefingPdf({ ...common, results: demoSyntheticView(), synthetic: true, outPath: synthetic, paper: 'A4' });
+  // invented cohort ranges, only to check the section is drawn from the document
+  const cohort = { occupants: 64, seed: 7, ranges: [{ personaId: 'desk-worker', strategyId: 'baseline', label: 'Melatonin suppression per night', unit: '%', decimals: 0, p05: 12.4, median: 31.6, p95: 58.2 }] };
+  await writeBriefingPdf({ ...common, results: demoSyntheticView(), synthetic: true, cohort, outPath: synthetic, paper: 'A4' });
 }, 300_000);
 
 afterAll(() => {
@@ -91,9 +93,13 @@ describe('briefing PDF of the demo scenario', () => {
     }
   });
 
-  it('draws the view-model path too: a synthetic layout view gives every section', () => {
+  it('draws the view-model path too: a synthetic layout view gives every section, with cohort ranges when given', () => {
     const text = pdfText(synthetic);
-    for (const heading of ['Summary', 'What was modelled', 'Methods and assumptions', 'Cautions']) expect(text).toContain(heading);
+    for (const heading of ['Summary', 'What was modelled', 'Cohort: ranges across virtual occupants', 'Methods and assumptions', 'Cautions']) expect(text).toContain(heading);
+    const squeezed = text.replace(/\s+/g, ' ');
+    expect(squeezed).toContain('64 virtual occupants');
+    expect(squeezed).toMatch(/12 %.*32 %.*58 %/);
+    expect(pdfText(a4)).not.toContain('Cohort: ranges');
   });
 
   it('carries the cautions on the summary page and again at the end', () => {
