@@ -14,7 +14,7 @@ export function printSettings(scenarioName: string, paper: PaperSize, generatedO
     status: 'ready',
     message: '',
     paper,
-    headerTemplate: `<div style="${TEMPLATE_STYLE}border-bottom:0.5pt solid #dfe3e8;padding-bottom:2mm;"><span>${escapeHtml(scenarioName)}</span><span>Zeitlight briefing</span></div>`,
+    headerTemplate: `<div style="${TEMPLATE_STYLE}border-bottom:0.5pt solid #dfe3e8;padding-bottom:2mm;"><span style="overflow:hidden;text-overflow:ellipsis;white-space:nowrap;max-width:75%;">${escapeHtml(scenarioName)}</span><span>Zeitlight briefing</span></div>`,
     footerTemplate: `<div style="${TEMPLATE_STYLE}"><span>${escapeHtml(generatedOn)} · Model estimates, not diagnosis or treatment</span><span>Page <span class="pageNumber"></span> of <span class="totalPages"></span></span></div>`,
     margins_mm: { top: 18, bottom: 16, left: 16, right: 16 },
   };
