@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { printBriefingPdf, REPORT_PAGE_URL, type ReportWindow } from './briefing-pdf.js';
+import { printBriefingPdf, REPORT_PAGE_URL, REPORT_WINDOW_OPTIONS, type ReportWindow } from './briefing-pdf.js';
+import { securityViolations } from '../security/web-preferences.js';
 
 function fakeWindow(settingsAfterPolls: number, settings: unknown) {
   const calls: string[] = [];
@@ -34,6 +35,11 @@ function fakeWindow(settingsAfterPolls: number, settings: unknown) {
 const READY = { status: 'ready', message: '', paper: 'Letter', headerTemplate: '<div>h</div>', footerTemplate: '<div>f</div>', margins_mm: { top: 25.4, bottom: 12.7, left: 16, right: 16 } };
 
 describe('briefing PDF in the desktop app', () => {
+  it('draws in a hidden window that meets the app’s security settings (Electron security checklist)', () => {
+    expect(REPORT_WINDOW_OPTIONS.show).toBe(false);
+    expect(securityViolations(REPORT_WINDOW_OPTIONS.webPreferences)).toEqual([]);
+  });
+
   it('loads the report page, hands it the document, waits for the drawing and prints with its header, footer and paper', async () => {
     const fake = fakeWindow(2, READY);
     const stages: number[] = [];

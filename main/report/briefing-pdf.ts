@@ -31,7 +31,7 @@ export const REPORT_WINDOW_OPTIONS = {
   show: false,
   width: 900,
   height: 1200,
-  webPreferences: { contextIsolation: true, nodeIntegration: false, sandbox: true, webSecurity: true, allowRunningInsecureContent: false, webviewTag: false, javascript: true, spellcheck: false },
+  webPreferences: { contextIsolation: true, nodeIntegration: false, nodeIntegrationInWorker: false, nodeIntegrationInSubFrames: false, sandbox: true, webSecurity: true, allowRunningInsecureContent: false, webviewTag: false, javascript: true, spellcheck: false },
 } as const;
 
 const MM_PER_INCH = 25.4;
