@@ -41,6 +41,8 @@ export interface RunInput {
   /** Only these personas (default all). */
   readonly personaIds?: readonly string[];
   readonly modelId?: PacemakerId;
+  /** Called after each persona × strategy with the fraction done (0–1) and a short stage text. */
+  readonly onProgress?: (fraction: number, stage: string) => void;
 }
 
 /** Per-minute light at the eye kept for exposure.csv and checks. */
@@ -49,6 +51,8 @@ export interface TimelineLight {
   readonly strategyId: string;
   readonly timeline: ExposureTimeline;
   readonly eye: EyeSeries;
+  /** Modelled plasma melatonin (pmol/L) with light and in dim light, at the body-clock samples (h). */
+  readonly melatonin: { readonly t_h: readonly number[]; readonly plasma_pmol_L: readonly number[]; readonly dim_pmol_L: readonly number[] };
 }
 
 export interface RunOutput {
@@ -108,6 +112,8 @@ export function runScenario(input: RunInput): RunOutput {
   const light: TimelineLight[] = [];
 
   const personas: PersonaResult[] = [];
+  const jobs = Math.max(1, expanded.timelines.filter((t) => wanted === undefined || wanted.has(t.personaId)).length);
+  let done = 0;
   for (const persona of scenario.personas) {
     if (wanted !== undefined && !wanted.has(persona.id)) continue;
     const runs: Omit<StrategyResult, 'headlines'>[] = [];
@@ -118,13 +124,15 @@ export function runScenario(input: RunInput): RunOutput {
       if (timeline === undefined) continue;
       const vPersona: Persona = variant.scenario.personas.find((p) => p.id === persona.id) ?? persona;
       const eye = eyeSeries({ variant: variant.scenario, persona: vPersona, timeline, clock, outdoor, night, logs, caches });
-      light.push({ personaId: persona.id, strategyId: variant.id, timeline, eye });
       const model = pacemakerFor(vPersona, modelId);
       const sleep = sleepSpecFor(vPersona, timeline);
       // Every strategy starts from the state entrained to the baseline's first day.
       if (variant.id === BASELINE_ID) initial = entrainedStart(model, mergedLightSeries(eye.mel_edi_lx), sleep);
       const bc = runBodyClockFor(model, eye.mel_edi_lx, sleep, initial, timeline.total_min);
       if (variant.id === BASELINE_ID) baselineCbt = bc.outcome.cbtmin_h;
+      light.push({ personaId: persona.id, strategyId: variant.id, timeline, eye, melatonin: { t_h: bc.run.samples.t_h, plasma_pmol_L: bc.run.samples.plasmaMelatonin_pmol_L, dim_pmol_L: bc.run.samples.dimMelatonin_pmol_L } });
+      done++;
+      input.onProgress?.(done / jobs, `${persona.name}: ${variant.name}`);
       runs.push(
         strategyMetrics({
           id: variant.id,

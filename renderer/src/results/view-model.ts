@@ -83,6 +83,15 @@ export interface ResultsView {
   readonly personas: readonly NamedItem[];
   readonly runs: readonly RunView[];
   readonly cautions: readonly string[];
+  /** The pipeline's recommended strategy per persona, with its reason and headline sentences (absent in synthetic views). */
+  readonly recommendations?: readonly Recommendation[];
+}
+
+export interface Recommendation {
+  readonly personaId: string;
+  readonly strategyId: string;
+  readonly reason: string;
+  readonly headlines: readonly string[];
 }
 
 export function findRun(view: ResultsView, personaId: string, strategyId: string): RunView | undefined {
