@@ -41,3 +41,24 @@ export { wallTimeToUtc_ms, utcToWallTime, utcOffsetAt_min, isValidTimeZone, addD
 
 export { DEMO_SCENARIO } from './demo/demo-scenario.js';
 export { exposureContext, luminaireOutputAt, clockWindowHolds, eyewearFilter, EYEWEAR_DEFAULTS, type ExposureContext, type EyewearFilter } from './timeline/exposure-context.js';
+
+export {
+  runScenario,
+  clearPipelineCaches,
+  exposureCsv,
+  summaryCsv,
+  RunInputError,
+  RESULTS_FORMAT,
+  RESULTS_FORMAT_VERSION,
+  RECOMMENDATION_RULE,
+  PIPELINE_VERSION,
+  type RunInput,
+  type RunOutput,
+  type RunResults,
+  type PersonaResult,
+  type StrategyResult,
+  type DayMetrics,
+  type StrategySummary,
+  type Headline,
+  type Recommendation,
+} from './run/index.js';

@@ -8,7 +8,7 @@ import { readFileSync } from 'node:fs';
 import { basename, dirname, resolve } from 'node:path';
 import { CliError, UsageError } from '../cli-error.js';
 import type { Command, CommandContext } from '../command.js';
-import { positionals, stringOption } from '../args.js';
+import { numberOption, positionals, stringOption } from '../args.js';
 import { formatProblem, validateScenarioText, type Scenario } from '../../schedules/index.js';
 import type { RunInput } from '../../schedules/run/index.js';
 import { runAndWrite } from '../run-output/run-and-write.js';
@@ -52,10 +52,30 @@ export function outOption(ctx: CommandContext): string {
   return out;
 }
 
+function wholeNumber(ctx: CommandContext, name: string, min: number, max: number): number | undefined {
+  const n = numberOption(ctx, name);
+  if (n === undefined) return undefined;
+  if (!Number.isInteger(n) || n < min || n > max) throw new UsageError(`--${name}: must be a whole number from ${min} to ${max} (got ${n})`);
+  return n;
+}
+
+/** --cohort n --seed s [--workers w]; the seed is required so that a cohort can be repeated. */
+function cohortOptions(ctx: CommandContext): { size: number; seed: number; workers?: number } | undefined {
+  const size = wholeNumber(ctx, 'cohort', 1, 100_000);
+  const seed = wholeNumber(ctx, 'seed', 0, Number.MAX_SAFE_INTEGER);
+  const workers = wholeNumber(ctx, 'workers', 1, 256);
+  if (size === undefined) {
+    if (seed !== undefined || workers !== undefined) throw new UsageError('--seed and --workers go with --cohort <n>');
+    return undefined;
+  }
+  if (seed === undefined) throw new UsageError('--cohort needs --seed <s> (any whole number ≥ 0) so that the same virtual occupants can be drawn again');
+  return { size, seed, ...(workers !== undefined ? { workers } : {}) };
+}
+
 export const runCommand: Command = {
   name: 'run',
   summary: 'Run a scenario and write results',
-  usage: '<scenario.json> --out <dir> [--force] [--pdf] [--chromium <path>] [--json]',
+  usage: '<scenario.json> --out <dir> [--force] [--pdf] [--chromium <path>] [--cohort <n> --seed <s> [--workers <n>]] [--json]',
   options: {
     out: { type: 'string' },
     force: { type: 'boolean' },
@@ -63,14 +83,13 @@ export const runCommand: Command = {
     chromium: { type: 'string' },
     cohort: { type: 'string' },
     seed: { type: 'string' },
+    workers: { type: 'string' },
   },
   async run(ctx: CommandContext): Promise<number> {
     const [file] = positionals(ctx, ['scenario.json']);
     if (file === undefined) throw new UsageError('expected a scenario file');
     const outDir = outOption(ctx);
-    if (ctx.values['cohort'] !== undefined || ctx.values['seed'] !== undefined) {
-      throw new UsageError('--cohort and --seed are not available in this version of zeitlight run yet; run without them for the personas as written');
-    }
+    const cohort = cohortOptions(ctx);
     const text = readText(file, 'the scenario');
     const scenario = validatedScenario(text, file);
     const inputs = externalInputs(scenario, file);
@@ -82,6 +101,7 @@ export const runCommand: Command = {
       pdf: ctx.values['pdf'] === true,
       ...(chromium !== undefined ? { chromiumPath: chromium } : {}),
       scenarioForReport: JSON.parse(text) as unknown,
+      ...(cohort !== undefined ? { cohort } : {}),
     });
     return 0;
   },

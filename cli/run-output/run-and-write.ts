@@ -10,6 +10,7 @@ import type { Scenario } from '../../schedules/index.js';
 import { exposureCsv, runScenario, RunInputError, summaryCsv, type RunInput, type RunResults } from '../../schedules/run/index.js';
 import { prepareOutputFolder, writeFilesAtomically } from './output-folder.js';
 import { writeBriefing } from './briefing-pdf.js';
+import { runCohorts } from './cohort-runs.js';
 
 export interface RunAndWriteOptions {
   readonly input: RunInput;
@@ -20,6 +21,8 @@ export interface RunAndWriteOptions {
   /** Extra files (e.g. the demo's scenario.json). */
   readonly extraFiles?: Readonly<Record<string, string>>;
   readonly scenarioForReport: unknown;
+  /** Also run a cohort of virtual occupants per persona. */
+  readonly cohort?: { readonly size: number; readonly seed: number; readonly workers?: number };
 }
 
 function runOrExplain(input: RunInput): ReturnType<typeof runScenario> {
@@ -34,7 +37,14 @@ function runOrExplain(input: RunInput): ReturnType<typeof runScenario> {
 export async function runAndWrite(ctx: CommandContext, o: RunAndWriteOptions): Promise<RunResults> {
   prepareOutputFolder(o.outDir, o.force);
   const t0 = performance.now();
-  const out = runOrExplain(o.input);
+  const single = runOrExplain(o.input);
+  let results: RunResults = single.results;
+  if (o.cohort !== undefined) {
+    const cohort = await runCohorts(o.input, o.cohort.size, o.cohort.seed, o.cohort.workers, ctx.json ? undefined : (text) => ctx.stderr(`\r${text}   `));
+    if (!ctx.json) ctx.stderr('\n');
+    results = { ...results, cohort };
+  }
+  const out = { ...single, results };
   const compute_ms = performance.now() - t0;
   const files: Record<string, string> = {
     'results.json': JSON.stringify(out.results, null, 1) + '\n',
@@ -62,6 +72,7 @@ export async function runAndWrite(ctx: CommandContext, o: RunAndWriteOptions): P
     }
     lines.push('', 'Wrote:', ...written.map((f) => `  ${f}`));
     if (pdfNote !== undefined) lines.push(`  (no report.pdf: ${pdfNote})`);
+    if (out.results.cohort !== undefined) lines.push(`Cohort: ${out.results.cohort.size} virtual occupants per person (seed ${out.results.cohort.seed}); ranges in results.json "cohort".`);
     for (const w of out.results.warnings) lines.push(`warning: ${w}`);
     lines.push('', HEALTH_CAUTION);
     ctx.stdout(lines.join('\n') + '\n');

@@ -4,6 +4,8 @@
  * start (local midnight of the first day); `*_local` are ISO 8601 local times with the UTC
  * offset at that moment. Light: melanopic EDI (CIE S 026) and photopic illuminance at the eye, lx.
  */
+import type { CohortSummary } from '../../model/cohort/aggregate-cohort.js';
+
 export const RESULTS_FORMAT = 'zeitlight-results';
 export const RESULTS_FORMAT_VERSION = 1;
 
@@ -130,4 +132,18 @@ export interface RunResults {
   readonly hours: { readonly start_local: readonly string[] };
   readonly personas: readonly PersonaResult[];
   readonly warnings: readonly string[];
+  /** Present when a cohort was run (`zeitlight run --cohort n --seed s`). */
+  readonly cohort?: CohortResults;
+}
+
+export interface CohortResults {
+  readonly size: number;
+  readonly seed: number;
+  /** Between-occupant spread used (model/cohort CohortSpread). */
+  readonly spread: { readonly intrinsicPeriodSd_h: number; readonly lightSensitivitySdLn: number; readonly ageRange_y: readonly [number, number] | null; readonly habitualMidSleepSd_h: number };
+  /** Summary metric names summarised per strategy. */
+  readonly metrics: readonly string[];
+  /** Per persona: strategy id → metric → { n, missing, median, q25, q75, iqr, p05, p95 } (null without finite values). */
+  readonly personas: readonly { readonly id: string; readonly summary: CohortSummary }[];
+  readonly note: string;
 }
