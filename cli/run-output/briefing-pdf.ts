@@ -32,7 +32,7 @@ export async function writeBriefing(dir: string, results: unknown, scenario: unk
     return { ok: true, path: r.path };
   } catch (err) {
     const text = err instanceof Error ? err.message : String(err);
-    const chromium = /chrom/i.test(text) ? ` ${CHROMIUM_HINT}` : '';
+    const chromium = /chrom/i.test(text) && !/apt-get/.test(text) ? ` ${CHROMIUM_HINT}` : '';
     return { ok: false, message: `no PDF briefing written (${text}); results.json, exposure.csv and summary.csv were written.${chromium}` };
   }
 }

@@ -71,7 +71,7 @@ export async function runAndWrite(ctx: CommandContext, o: RunAndWriteOptions): P
       for (const h of rec?.headlines ?? []) lines.push(`  • ${h.sentence}`);
     }
     lines.push('', 'Wrote:', ...written.map((f) => `  ${f}`));
-    if (pdfNote !== undefined) lines.push(`  (no report.pdf: ${pdfNote})`);
+    if (pdfNote !== undefined) lines.push('  (no report.pdf — see the message on stderr)');
     if (out.results.cohort !== undefined) lines.push(`Cohort: ${out.results.cohort.size} virtual occupants per person (seed ${out.results.cohort.seed}); ranges in results.json "cohort".`);
     for (const w of out.results.warnings) lines.push(`warning: ${w}`);
     lines.push('', HEALTH_CAUTION);

@@ -93,3 +93,13 @@ describe('zeitlight demo', () => {
     expect(stdout.join('')).toMatch(/recommended:[\s\S]*Caution: model estimates/);
   }, 60_000);
 });
+
+describe('zeitlight demo --pdf without Chromium', () => {
+  test('still writes the JSON and CSV files and says how to get Chromium', async () => {
+    const out = join(tmp(), 'demo');
+    const { c, err } = ctx([], { out, pdf: true, chromium: join(tmp(), 'no-chromium-here') });
+    expect(await demoCommand.run(c)).toBe(0);
+    expect(readdirSync(out).sort()).toEqual(['exposure.csv', 'results.json', 'scenario.json', 'summary.csv']);
+    expect(err.join('')).toMatch(/no PDF briefing written[\s\S]*(apt-get install chromium|ZEITLIGHT_CHROMIUM)/);
+  }, 60_000);
+});
