@@ -127,7 +127,8 @@ export function strategyMetrics(inp: StrategyInput): Omit<StrategyResult, 'headl
     const cbt = bc.cbtmin_h.find((t) => dayOf(t) === d.index);
     const dlmo = bc.dlmo_h.find((t) => dayOf(t) === d.index);
     const dlmoBeforeSleep = main === undefined ? undefined : [...bc.dlmo_h].reverse().find((t) => t <= main.start_h + 6 && t > main.start_h - 18);
-    const night = bc.nights.findIndex((nt) => dayOf(nt.onset_h) === d.index);
+    // A night cut off by the end of the run is not a whole night: no suppression figure for it.
+    const night = bc.nights.findIndex((nt) => dayOf(nt.onset_h) === d.index && nt.end_h < n / 60 - 1e-6);
     return {
       index: d.index,
       date: d.date,
@@ -193,7 +194,7 @@ export function strategyMetrics(inp: StrategyInput): Omit<StrategyResult, 'headl
     cbtmin: bc.cbtmin_h.filter((t) => t >= 0 && t < n / 60).map(ev),
     dlmo: bc.dlmo_h.filter((t) => t >= 0 && t < n / 60).map(ev),
     sleep_episodes: bc.sleepEpisodes.map((e) => ({ start: ev(e.start_h), end: ev(e.end_h), duration_h: round(e.end_h - e.start_h, 4) })),
-    melatonin_nights: bc.nights.map((nt, i) => ({ onset: ev(nt.onset_h), end_h: round(nt.end_h, 4), suppression_pct: roundOrNull(bc.suppression_pct[i] ?? null, 3) })),
+    melatonin_nights: bc.nights.map((nt, i) => ({ onset: ev(nt.onset_h), end_h: round(nt.end_h, 4), suppression_pct: nt.end_h < n / 60 - 1e-6 ? roundOrNull(bc.suppression_pct[i] ?? null, 3) : null })),
     solver: { light_segments: bc.segments, rhs_evaluations: inp.rhsEvaluations },
   };
 }
