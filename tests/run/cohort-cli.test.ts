@@ -18,7 +18,7 @@ describe.skipIf(!built)('cohort runs from the command line', () => {
   test('same seed gives the same cohort with 1 and 2 workers', () => {
     const dir = mkdtempSync(join(tmpdir(), 'zeitlight-cohort-'));
     const file = join(dir, 'scenario.json');
-    writeFileSync(file, JSON.stringify({ ...DEMO_SCENARIO, run: { startDate: '2026-03-23', days: 2 }, personas: DEMO_SCENARIO.personas.slice(1), strategies: DEMO_SCENARIO.strategies.filter((s) => s.personas?.includes('desk-worker')), rosters: [] }));
+    writeFileSync(file, JSON.stringify({ ...DEMO_SCENARIO, run: { startDate: '2026-03-23', days: 2 }, personas: DEMO_SCENARIO.personas.slice(1), strategies: (DEMO_SCENARIO.strategies ?? []).filter((s) => s.personas?.includes('desk-worker')), rosters: [] }));
     const read = (workers: number): NonNullable<RunResults['cohort']> => {
       const out = join(dir, `out${workers}`);
       const r = runZeitlight(['run', file, '--out', out, '--cohort', '5', '--seed', '11', '--workers', String(workers)]);
