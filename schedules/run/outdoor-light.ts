@@ -132,7 +132,10 @@ function computeDaylight(scenario: Scenario, timeline: ExposureTimeline, weather
   const snowMonths = new Set(site.ground.snow.months);
   const month = new Uint8Array(timeline.total_min);
   for (const d of timeline.days) month.fill(Number(d.date.slice(5, 7)), d.start_min, d.start_min + d.length_min);
-  const conditions = outdoorConditionsFromDaylightSeries(series, month);
+  const raw = outdoorConditionsFromDaylightSeries(series, month);
+  // Perez ε can run to several hundred when the diffuse part is tiny at a low sun; the room
+  // model accepts ≤ 100, and every ε above 6.2 falls in Perez's clearest bin (Perez et al. 1990).
+  const conditions = raw.perezEpsilon === undefined ? raw : { ...raw, perezEpsilon: raw.perezEpsilon.map((e) => Math.min(100, e)) };
   // Snow cover from the month list when the weather has no snow depth.
   const snowOnGround = conditions.snowOnGround ?? new Uint8Array(timeline.total_min);
   if (site.weather.kind === 'sky-model' || !site.weather.snowFromFile) for (let i = 0; i < month.length; i++) snowOnGround[i] = snowMonths.has(month[i] as number) ? 1 : 0;
