@@ -1,7 +1,8 @@
 /**
  * CSV views of a run (pure text, so the app can export the same files):
  *  exposure.csv — light at the eye every EXPOSURE_STEP_MIN real minutes per persona × strategy:
- *    interval start in UTC and local time (with offset), place, activity, asleep, photopic lux
+ *    interval start in UTC and local time (with offset), place, activity, asleep (the body-clock
+ *    run's sleep — prescribed or predicted — at the interval start), photopic lux
  *    and melanopic EDI in total and per source (means over the interval). Rows follow real time,
  *    so a clock change shows as a local-time jump with no lost or repeated interval.
  *  summary.csv — one row per persona × strategy with the summary metrics.
@@ -39,7 +40,7 @@ export function exposureCsv(light: readonly TimelineLight[], clock: LocalClock):
         clock.dayIndex[a] ?? 0,
         s?.placeId ?? '',
         s?.activity ?? '',
-        s?.sleep === 'asleep' ? 1 : 0,
+        tl.sleepEpisodes.some((e) => a / 60 >= e.start_h - 1e-9 && a / 60 < e.end_h - 1e-9) ? 1 : 0,
         meanOf(eye.photopic_lx),
         meanOf(eye.mel_edi_lx),
         ...LIGHT_SOURCES.map((src) => meanOf(eye.melBySource[src])),

@@ -51,6 +51,8 @@ export interface TimelineLight {
   readonly strategyId: string;
   readonly timeline: ExposureTimeline;
   readonly eye: EyeSeries;
+  /** Sleep episodes the body-clock run used or predicted (h since the run start). */
+  readonly sleepEpisodes: readonly { readonly start_h: number; readonly end_h: number }[];
   /** Modelled plasma melatonin (pmol/L) with light and in dim light, at the body-clock samples (h). */
   readonly melatonin: { readonly t_h: readonly number[]; readonly plasma_pmol_L: readonly number[]; readonly dim_pmol_L: readonly number[] };
 }
@@ -130,7 +132,7 @@ export function runScenario(input: RunInput): RunOutput {
       if (variant.id === BASELINE_ID) initial = entrainedStart(model, mergedLightSeries(eye.mel_edi_lx), sleep);
       const bc = runBodyClockFor(model, eye.mel_edi_lx, sleep, initial, timeline.total_min);
       if (variant.id === BASELINE_ID) baselineCbt = bc.outcome.cbtmin_h;
-      light.push({ personaId: persona.id, strategyId: variant.id, timeline, eye, melatonin: { t_h: bc.run.samples.t_h, plasma_pmol_L: bc.run.samples.plasmaMelatonin_pmol_L, dim_pmol_L: bc.run.samples.dimMelatonin_pmol_L } });
+      light.push({ personaId: persona.id, strategyId: variant.id, timeline, eye, sleepEpisodes: bc.outcome.sleepEpisodes, melatonin: { t_h: bc.run.samples.t_h, plasma_pmol_L: bc.run.samples.plasmaMelatonin_pmol_L, dim_pmol_L: bc.run.samples.dimMelatonin_pmol_L } });
       done++;
       input.onProgress?.(done / jobs, `${persona.name}: ${variant.name}`);
       runs.push(
