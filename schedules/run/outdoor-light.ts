@@ -10,7 +10,6 @@ import { outdoorConditionsFromDaylightSeries, type OutdoorConditions } from '../
 import type { Scenario } from '../schema/scenario-types.js';
 import { utcOffsetAt_min } from '../time/local-calendar.js';
 import type { ExposureTimeline } from '../timeline/exposure-types.js';
-import { dateOfDay } from '../timeline/wall-state.js';
 import { RunInputError } from './run-input-error.js';
 import { skyConditionForDay } from './sky-days.js';
 
@@ -118,14 +117,13 @@ function computeDaylight(scenario: Scenario, timeline: ExposureTimeline, weather
     skyByDay = timeline.days.map(() => null);
   } else {
     const w = site.weather;
+    // One condition per run day; the series counts its days from local standard midnight.
     const conditions = timeline.days.map((d) => skyConditionForDay(w, d.date));
-    // One more day either side: the series' days start at local standard midnight.
-    const before = skyConditionForDay(w, dateOfDay(scenario.run.startDate, -1));
     series = daylightFromSkyConditions({
       ...window,
       site: { latitude_deg: site.latitude_deg, longitude_deg: site.longitude_deg, elevation_m: site.elevation_m },
       utcOffset_h: standardOffset_h(site.timeZone, Number(scenario.run.startDate.slice(0, 4))),
-      conditions: conditions.length > 0 ? conditions : [before],
+      conditions: conditions.length > 0 ? conditions : [skyConditionForDay(w, scenario.run.startDate)],
     });
     skyByDay = conditions;
   }
