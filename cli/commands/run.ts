@@ -11,6 +11,7 @@ import type { Command, CommandContext } from '../command.js';
 import { numberOption, positionals, stringOption } from '../args.js';
 import { formatProblem, validateScenarioText, type Scenario } from '../../schedules/index.js';
 import type { RunInput } from '../../schedules/run/index.js';
+import { paperOption } from '../run-output/paper-option.js';
 import { runAndWrite } from '../run-output/run-and-write.js';
 
 function readText(file: string, what: string, field?: string): string {
@@ -75,11 +76,12 @@ function cohortOptions(ctx: CommandContext): { size: number; seed: number; worke
 export const runCommand: Command = {
   name: 'run',
   summary: 'Run a scenario and write results',
-  usage: '<scenario.json> --out <dir> [--force] [--pdf] [--chromium <path>] [--cohort <n> --seed <s> [--workers <n>]] [--json]',
+  usage: '<scenario.json> --out <dir> [--force] [--pdf [--paper A4|Letter] [--chromium <path>]] [--cohort <n> --seed <s> [--workers <n>]] [--json]',
   options: {
     out: { type: 'string' },
     force: { type: 'boolean' },
     pdf: { type: 'boolean' },
+    paper: { type: 'string' },
     chromium: { type: 'string' },
     cohort: { type: 'string' },
     seed: { type: 'string' },
@@ -99,6 +101,7 @@ export const runCommand: Command = {
       outDir,
       force: ctx.values['force'] === true,
       pdf: ctx.values['pdf'] === true,
+      paper: paperOption(ctx),
       ...(chromium !== undefined ? { chromiumPath: chromium } : {}),
       scenarioForReport: JSON.parse(text) as unknown,
       ...(cohort !== undefined ? { cohort } : {}),

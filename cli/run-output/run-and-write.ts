@@ -18,6 +18,7 @@ export interface RunAndWriteOptions {
   readonly force: boolean;
   readonly pdf: boolean;
   readonly chromiumPath?: string;
+  readonly paper?: 'A4' | 'Letter';
   /** Extra files (e.g. the demo's scenario.json). */
   readonly extraFiles?: Readonly<Record<string, string>>;
   readonly scenarioForReport: unknown;
@@ -55,7 +56,7 @@ export async function runAndWrite(ctx: CommandContext, o: RunAndWriteOptions): P
   const written = writeFilesAtomically(o.outDir, files);
   let pdfNote: string | undefined;
   if (o.pdf) {
-    const r = await writeBriefing(o.outDir, out.results, o.scenarioForReport, o.chromiumPath);
+    const r = await writeBriefing(o.outDir, out.results, o.scenarioForReport, o.chromiumPath, o.paper);
     if (r.ok) written.push(r.path);
     else {
       pdfNote = r.message;

@@ -12,6 +12,7 @@ import type { CommandContext } from '../../cli/command.js';
 import { demoCommand } from '../../cli/commands/demo.js';
 import { runCommand } from '../../cli/commands/run.js';
 import { DEMO_SCENARIO } from '../../schedules/index.js';
+import { runZeitlight } from '../helpers/run-cli.js';
 
 function ctx(positionals: string[], values: Record<string, string | boolean>, json = false) {
   const out: string[] = [];
@@ -86,7 +87,7 @@ describe('zeitlight run', () => {
 describe('zeitlight demo', () => {
   test('writes the scenario it ran next to the results', async () => {
     const out = join(tmp(), 'demo');
-    const { c, out: stdout } = ctx([], { out });
+    const { c, out: stdout } = ctx([], { out, 'no-pdf': true });
     expect(await demoCommand.run(c)).toBe(0);
     expect(readdirSync(out).sort()).toEqual(['exposure.csv', 'results.json', 'scenario.json', 'summary.csv']);
     expect(JSON.parse(readFileSync(join(out, 'scenario.json'), 'utf8'))).toEqual(JSON.parse(JSON.stringify(DEMO_SCENARIO)));
@@ -94,12 +95,29 @@ describe('zeitlight demo', () => {
   }, 60_000);
 });
 
-describe('zeitlight demo --pdf without Chromium', () => {
+describe('zeitlight demo without Chromium', () => {
   test('still writes the JSON and CSV files and says how to get Chromium', async () => {
     const out = join(tmp(), 'demo');
-    const { c, err } = ctx([], { out, pdf: true, chromium: join(tmp(), 'no-chromium-here') });
+    const { c, err } = ctx([], { out, chromium: join(tmp(), 'no-chromium-here') });
     expect(await demoCommand.run(c)).toBe(0);
     expect(readdirSync(out).sort()).toEqual(['exposure.csv', 'results.json', 'scenario.json', 'summary.csv']);
     expect(err.join('')).toMatch(/no PDF briefing written[\s\S]*(apt-get install chromium|ZEITLIGHT_CHROMIUM)/);
   }, 60_000);
+});
+
+describe.skipIf(!existsSync('/usr/bin/chromium'))('zeitlight demo with Chromium', () => {
+  test('writes the PDF briefing report.pdf by default, next to the JSON and CSV results', () => {
+    const out = join(tmp(), 'demo');
+    const r = runZeitlight(['demo', '--out', out, '--paper', 'letter']);
+    expect(r.stderr).toBe('');
+    expect(r.status).toBe(0);
+    expect(readdirSync(out).sort()).toEqual(['exposure.csv', 'report.pdf', 'results.json', 'scenario.json', 'summary.csv']);
+    expect(readFileSync(join(out, 'report.pdf')).subarray(0, 5).toString('latin1')).toBe('%PDF-');
+  }, 120_000);
+
+  test('refuses a paper size other than A4 or Letter before running', () => {
+    const r = runZeitlight(['demo', '--out', join(tmp(), 'demo'), '--paper', 'A3']);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/--paper must be A4 or Letter, not "A3"/);
+  });
 });
