@@ -5,7 +5,6 @@ import { App } from './App.js';
 import { WorkspaceContext } from './state/workspace-context.js';
 import { WorkspaceController } from './state/workspace-controller.js';
 import { desktopApi } from './desktop/desktop-api.js';
-import { syntheticResultsView } from './results/synthetic-view.js';
 import './styles.css';
 
 const controller = new WorkspaceController(desktopApi());
@@ -20,12 +19,7 @@ if (container !== null) {
   );
 }
 
-void controller.start().then(() => {
-  // Layout check of the results views with clearly labelled synthetic data (web mode only).
-  if (desktopApi().platform === 'web' && new URLSearchParams(window.location.search).get('layout-check') === 'synthetic') {
-    controller.store.setResults({ status: 'ready', view: syntheticResultsView(7), synthetic: true });
-  }
-});
+void controller.start();
 
 window.addEventListener('beforeunload', (event) => {
   const state = controller.store.getSnapshot();

@@ -4,7 +4,7 @@ import { createBrowserAdapter, initialDocumentFromQuery } from './browser-adapte
 describe('browser adapter', () => {
   it('opens the demo scenario for ?open=demo and an empty workspace otherwise', async () => {
     expect(initialDocumentFromQuery('?open=demo')).toEqual({ kind: 'demo' });
-    expect(initialDocumentFromQuery('?open=demo&layout-check=synthetic')).toEqual({ kind: 'demo' });
+    expect(initialDocumentFromQuery('?open=demo&lang=en')).toEqual({ kind: 'demo' });
     expect(initialDocumentFromQuery('?open=other')).toEqual({ kind: 'empty' });
     expect(initialDocumentFromQuery('')).toEqual({ kind: 'empty' });
     expect(await createBrowserAdapter({ search: '?open=demo' }).initialDocument()).toEqual({ kind: 'demo' });

@@ -40,9 +40,28 @@ function metric(id: string, label: string, unit: string, value: number | null, d
   return { id, label, unit, value, decimals, better, increaseWord, decreaseWord };
 }
 
+/** Local clock time of a "*_local" ISO time as hours; times before noon count after midnight (24 + h), so evening markers keep their order. */
+export function clockHoursOfLocal(local: string | null): number | null {
+  const m = local === null ? null : /T(\d{2}):(\d{2})/.exec(local);
+  if (m === null) return null;
+  const h = Number(m[1]) + Number(m[2]) / 60;
+  return h < 12 ? h + 24 : h;
+}
+
+/** The last day of the run on which the marker was found, as local clock hours. */
+function lastDayClock(days: readonly { readonly dlmo_local: string | null; readonly cbtmin_local: string | null }[], key: 'dlmo_local' | 'cbtmin_local', wrapBeforeNoon: boolean): number | null {
+  for (let i = days.length - 1; i >= 0; i--) {
+    const h = clockHoursOfLocal(days[i]?.[key] ?? null);
+    if (h !== null) return wrapBeforeNoon ? h : h >= 24 ? h - 24 : h;
+  }
+  return null;
+}
+
 function metricsOf(s: StrategyResult): MetricValue[] {
   const m = s.summary;
   return [
+    metric('dlmo', 'DLMO (last day, local clock)', 'h', lastDayClock(s.days, 'dlmo_local', true), 2, 'none', 'later', 'earlier'),
+    metric('cbtmin', 'CBTmin (last day, local clock)', 'h', lastDayClock(s.days, 'cbtmin_local', false), 2, 'none', 'later', 'earlier'),
     metric('phase-shift', 'Body-clock shift vs baseline (last 7 days)', 'h', m.mean_phase_shift_h, 2, 'none', 'later', 'earlier'),
     metric('day-above-250', 'Daytime hours ≥ 250 lx mEDI (mean per day)', 'h', m.mean_daytime_hours_ge_250_lx, 1, 'higher', 'more', 'fewer'),
     metric('pre-sleep', 'Light in the 3 h before sleep (mean mEDI)', 'lx', m.mean_pre_sleep_mel_edi_lx, 1, 'lower'),

@@ -1,5 +1,5 @@
-// A synthetic results view built from simple closed-form shapes. NOT a model output: it exists
-// to test chart shaping and to check the results layout before the run pipeline is wired.
+// A results view built from simple closed-form shapes for tests of chart shaping and the briefing layout only.
+// NOT a model output and never shown in the app.
 // Strategy `brighter-morning` gets more morning light and a DLMO 0.1 h earlier per day (capped),
 // so direction-of-change checks have something to read.
 import type { MetricValue, ResultsView, RunView } from './view-model.js';

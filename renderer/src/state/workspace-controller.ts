@@ -8,6 +8,7 @@ import { newScenario } from '../scenario/new-scenario.js';
 import { RunScheduler } from '../worker/run-scheduler.js';
 import type { PageToWorker, WorkerToPage } from '../worker/simulation-protocol.js';
 import { resultsComparisonCsv } from '../charts/comparison-csv.js';
+import type { ResultsView } from '../results/view-model.js';
 import { isDirty, WorkspaceStore } from './workspace-store.js';
 
 const EDIT_REPORT_DELAY_MS = 500;
@@ -166,37 +167,38 @@ export class WorkspaceController {
     this.worker = null;
   }
 
+  /** The results on screen: the latest ready view, or the one kept while a new run goes. */
+  shownView(): ResultsView | null {
+    const r = this.store.getSnapshot().results;
+    return r.status === 'ready' ? r.view : r.status === 'running' ? r.previous : null;
+  }
+
   private startWorkerRun(runId: number, scenario: unknown): void {
-    const current = this.store.getSnapshot().results;
-    if (current.status !== 'ready' || !current.synthetic) this.store.setResults({ status: 'running', fraction: 0, stage: 'Starting' });
+    this.store.setResults({ status: 'running', fraction: 0, stage: 'Starting', previous: this.shownView() });
     const message: PageToWorker = { type: 'run', runId, scenario };
     this.ensureWorker().postMessage(message);
   }
 
   private onWorkerMessage(message: WorkerToPage): void {
     if (!this.scheduler.isCurrent(message.runId)) return;
-    const keepSynthetic = (() => {
-      const r = this.store.getSnapshot().results;
-      return r.status === 'ready' && r.synthetic;
-    })();
     switch (message.type) {
       case 'progress':
-        if (!keepSynthetic) this.store.setResults({ status: 'running', fraction: message.fraction, stage: message.stage });
+        this.store.setResults({ status: 'running', fraction: message.fraction, stage: message.stage, previous: this.shownView() });
         return;
       case 'problems':
         this.store.setProblems(message.problems);
         if (message.problems.some((p) => p.severity === 'error')) {
           this.scheduler.finished(message.runId);
-          if (!keepSynthetic) this.store.setResults({ status: 'failed', message: 'Fix the problems listed below to see results.' });
+          this.store.setResults({ status: 'failed', message: 'Fix the problems listed below to see results.' });
         }
         return;
       case 'results':
         this.scheduler.finished(message.runId);
-        this.store.setResults({ status: 'ready', view: message.view, synthetic: false });
+        this.store.setResults({ status: 'ready', view: message.view });
         return;
       case 'unavailable':
         this.scheduler.finished(message.runId);
-        if (!keepSynthetic) this.store.setResults({ status: 'unavailable', message: message.message });
+        this.store.setResults({ status: 'unavailable', message: message.message });
         return;
       case 'failed':
         this.scheduler.finished(message.runId);

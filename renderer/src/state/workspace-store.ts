@@ -8,8 +8,9 @@ import { applyEdit, canRedo, canUndo, redo, startHistory, undo, type History } f
 
 export type ResultsState =
   | { readonly status: 'idle' }
-  | { readonly status: 'running'; readonly fraction: number; readonly stage: string }
-  | { readonly status: 'ready'; readonly view: ResultsView; readonly synthetic: boolean }
+  /** `previous`: the last results, still shown (marked as updating) while the new run goes. */
+  | { readonly status: 'running'; readonly fraction: number; readonly stage: string; readonly previous: ResultsView | null }
+  | { readonly status: 'ready'; readonly view: ResultsView }
   | { readonly status: 'unavailable'; readonly message: string }
   | { readonly status: 'failed'; readonly message: string };
 

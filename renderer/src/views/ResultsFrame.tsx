@@ -40,7 +40,7 @@ export function ResultsFrame({
   showDay: boolean;
   children: (view: ResultsView, personaId: string) => ReactNode;
 }) {
-  const view = results.status === 'ready' ? results.view : null;
+  const view = results.status === 'ready' ? results.view : results.status === 'running' ? results.previous : null;
   const personaId = view?.personas.some((p) => p.id === selection.personaId) === true ? selection.personaId : (view?.personas[0]?.id ?? '');
   return (
     <section className="panel" aria-labelledby="results-title">
@@ -48,9 +48,9 @@ export function ResultsFrame({
         <h2 id="results-title">{title}</h2>
         <p className="panel-lead">{lead}</p>
       </header>
-      {results.status === 'ready' && results.synthetic && (
-        <p className="banner banner-warning" role="note">
-          Synthetic data for a layout check — not a simulation result.
+      {results.status === 'running' && results.previous !== null && (
+        <p className="banner" role="status">
+          Updating after your edit… {results.stage} — the results below are from before it.
         </p>
       )}
       <Cautions />
@@ -76,7 +76,7 @@ export function ResultsFrame({
         </div>
       )}
       {results.status === 'idle' && <p className="empty">Open or create a scenario to see results.</p>}
-      {results.status === 'running' && <p className="empty">Simulating… {results.stage}</p>}
+      {results.status === 'running' && results.previous === null && <p className="empty">Simulating… {results.stage}</p>}
       {results.status === 'unavailable' && <p className="empty">{results.message}</p>}
       {results.status === 'failed' && <p className="empty empty-error">{results.message}</p>}
       {view !== null && <div className="results-body">{children(view, personaId)}</div>}
