@@ -24,7 +24,7 @@ export interface BodyClockOutcome {
   readonly cbtmin_h: number[];
   readonly dlmo_h: number[];
   readonly nights: MelatoninNight[];
-  /** Acute suppression per night (%), null where the dim-light reference is ~0. */
+  /** Acute suppression per night (%), null where the night is cut off by the end of the run or the dim-light reference is ~0. */
   readonly suppression_pct: (number | null)[];
   readonly sleepEpisodes: SleepEpisode[];
   /** KSS samples (every 0.25 h; NaN asleep). */
@@ -82,7 +82,7 @@ export function runBodyClockFor(model: Pacemaker, mel_lx: Float64Array, sleep: S
       cbtmin_h: run.cbtmin_h,
       dlmo_h: run.cbtmin_h.map((t) => t - DLMO_BEFORE_CBTMIN_H),
       nights: run.nights,
-      suppression_pct: run.nights.map((nt) => (nt.dimAuc_pmol_h_L >= MIN_NIGHT_AUC && Number.isFinite(nt.acuteSuppression_pct) ? nt.acuteSuppression_pct : null)),
+      suppression_pct: run.nights.map((nt) => (nt.complete && nt.dimAuc_pmol_h_L >= MIN_NIGHT_AUC && Number.isFinite(nt.acuteSuppression_pct) ? nt.acuteSuppression_pct : null)),
       sleepEpisodes: run.sleepEpisodes,
       kssSamples: { t_h: run.samples.t_h, kss: run.samples.kss },
       kssHourly: hourlyKss(run, hours),
