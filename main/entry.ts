@@ -10,6 +10,7 @@ import { realTimers } from './files/autosaver.js';
 import { scenarioFilesInArgs } from './app/command-line.js';
 import { securityViolations } from './security/web-preferences.js';
 import { APP_SCHEME, APP_SCHEME_PRIVILEGES, handleAppScheme } from './security/app-protocol.js';
+import { openReportWindow } from './report/report-window.js';
 
 // dist/electron/main.mjs sits two folders below the app root.
 const appRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
@@ -30,6 +31,7 @@ if (!app.requestSingleInstanceLock()) {
           if (problems.length > 0) throw new Error(`refusing an insecure window: ${problems.join('; ')}`);
           return new BrowserWindow(options);
         },
+        createReportWindow: () => openReportWindow((options) => new BrowserWindow(options), (what) => console.warn(`[zeitlight] briefing window blocked ${what}`)),
         windowForEvent: (event) => BrowserWindow.fromWebContents(event.sender),
         focusedWindow: () => BrowserWindow.getFocusedWindow(),
         dialog,

@@ -1,7 +1,7 @@
 // Preload script (bundled to CommonJS; sandboxed preloads may only require 'electron').
 // Exposes exactly one task-level object, window.zeitlight, and no Electron or Node objects.
 import { contextBridge, ipcRenderer } from 'electron';
-import type { DesktopApi, InvokeChannel, InvokeChannels, MenuCommand } from '../types/desktop-api.js';
+import type { DesktopApi, ExportProgress, InvokeChannel, InvokeChannels, MenuCommand } from '../types/desktop-api.js';
 
 function invoke<C extends InvokeChannel>(channel: C, ...args: InvokeChannels[C]['args']): Promise<InvokeChannels[C]['result']> {
   return ipcRenderer.invoke(channel, ...args) as Promise<InvokeChannels[C]['result']>;
@@ -15,6 +15,13 @@ const api: DesktopApi = {
   reportEdit: (report) => invoke('document:edited', report),
   exportCsv: (request) => invoke('export:csv', request),
   exportPdf: (request) => invoke('export:pdf', request),
+  onExportProgress: (listener) => {
+    const wrapped = (_event: unknown, progress: ExportProgress) => listener(progress);
+    ipcRenderer.on('export:progress', wrapped);
+    return () => {
+      ipcRenderer.removeListener('export:progress', wrapped);
+    };
+  },
   onMenuCommand: (listener) => {
     const wrapped = (_event: unknown, command: MenuCommand) => listener(command);
     ipcRenderer.on('menu:command', wrapped);

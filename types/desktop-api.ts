@@ -35,6 +35,30 @@ export interface CsvExportRequest {
 export interface PdfExportRequest {
   /** Suggested file name without directory, e.g. "briefing.pdf". */
   readonly suggestedName: string;
+  /**
+   * The briefing document the report page draws (renderer/report/src/briefing-document.ts,
+   * kind "zeitlight-briefing"): the scenario, the results view and cohort ranges when run.
+   */
+  readonly briefing: BriefingRequest;
+}
+
+/** The briefing document as it crosses the bridge; main checks its shape before printing. */
+export interface BriefingRequest {
+  readonly kind: 'zeitlight-briefing';
+  readonly paper: 'A4' | 'Letter';
+  readonly generatedOn: string;
+  readonly zeitlightVersion: string;
+  readonly client?: string;
+  readonly scenario: Record<string, unknown>;
+  readonly view: Record<string, unknown>;
+  readonly cohort?: Record<string, unknown>;
+}
+
+/** Progress of a long export, sent by main to the window that asked for it. */
+export interface ExportProgress {
+  /** 0 … 1. */
+  readonly fraction: number;
+  readonly stage: string;
 }
 
 /** The result of anything that writes a file chosen by the user. */
@@ -83,6 +107,7 @@ export type InvokeChannel = keyof InvokeChannels;
 /** One-way events main sends to a window. */
 export interface EventChannels {
   'menu:command': MenuCommand;
+  'export:progress': ExportProgress;
 }
 
 /**
@@ -97,6 +122,8 @@ export interface DesktopApi {
   reportEdit(report: EditReport): Promise<void>;
   exportCsv(request: CsvExportRequest): Promise<WriteOutcome>;
   exportPdf(request: PdfExportRequest): Promise<WriteOutcome>;
+  /** Subscribes to progress of the briefing export; returns an unsubscribe function. */
+  onExportProgress(listener: (progress: ExportProgress) => void): () => void;
   /** Subscribes to menu commands; returns an unsubscribe function. */
   onMenuCommand(listener: (command: MenuCommand) => void): () => void;
 }

@@ -2,6 +2,7 @@
 // point passes the real modules; tests pass fakes (the Electron binary is not needed).
 import type { App, BrowserWindowConstructorOptions, Dialog, IpcMain, MenuItemConstructorOptions, WebContents, IpcMainInvokeEvent } from 'electron';
 import type { GuardedSession } from '../security/navigation-guard.js';
+import type { ReportWindow } from '../report/briefing-pdf.js';
 
 /** The members of a BrowserWindow the controller relies on. */
 export interface AppWindow {
@@ -19,6 +20,8 @@ export interface AppWindow {
 export interface ElectronModules {
   readonly app: Pick<App, 'on' | 'getPath' | 'quit' | 'addRecentDocument'>;
   readonly createWindow: (options: BrowserWindowConstructorOptions) => AppWindow;
+  /** A hidden, sandboxed window for printing the briefing (REPORT_WINDOW_OPTIONS, navigation blocked). */
+  readonly createReportWindow: () => ReportWindow;
   /** Finds the controller's window for an IPC event (BrowserWindow.fromWebContents in the app). */
   readonly windowForEvent: (event: IpcMainInvokeEvent) => AppWindow | null;
   readonly focusedWindow: () => AppWindow | null;

@@ -65,7 +65,29 @@ export class FakeWindow extends Emitter {
   }
 }
 
+/** The hidden briefing window: the page reports itself drawn on the first poll. */
+export class FakeReportWindow {
+  readonly scripts: string[] = [];
+  loaded: string | null = null;
+  destroyed = false;
+  readonly webContents = {
+    executeJavaScript: async (code: string): Promise<unknown> => {
+      this.scripts.push(code);
+      if (code.startsWith('window.__zeitlightRender(')) return true;
+      return { status: 'ready', message: '', paper: 'A4', headerTemplate: '<div></div>', footerTemplate: '<div></div>', margins_mm: { top: 20, bottom: 15, left: 15, right: 15 } };
+    },
+    printToPDF: async (): Promise<Buffer> => Buffer.from('%PDF-1.7 fake briefing'),
+  };
+  async loadURL(url: string): Promise<void> {
+    this.loaded = url;
+  }
+  destroy(): void {
+    this.destroyed = true;
+  }
+}
+
 export interface FakeElectron {
+  reportWindows: FakeReportWindow[];
   modules: ElectronModules;
   windows: FakeWindow[];
   handlers: Map<string, (event: IpcMainInvokeEvent, ...args: unknown[]) => unknown>;
@@ -84,6 +106,7 @@ export interface FakeElectron {
 
 export function fakeElectron(appPageUrl: string, platform: NodeJS.Platform = 'linux'): FakeElectron {
   const fake: FakeElectron = {
+    reportWindows: [],
     windows: [],
     handlers: new Map(),
     menus: [],
@@ -114,6 +137,11 @@ export function fakeElectron(appPageUrl: string, platform: NodeJS.Platform = 'li
       const w = new FakeWindow(options);
       fake.windows.push(w);
       return w as unknown as AppWindow;
+    },
+    createReportWindow: () => {
+      const w = new FakeReportWindow();
+      fake.reportWindows.push(w);
+      return w as unknown as ReturnType<ElectronModules['createReportWindow']>;
     },
     windowForEvent: (event) => (fake.windows.find((w) => w.webContents === (event.sender as unknown)) ?? null) as unknown as AppWindow | null,
     focusedWindow: () => (fake.windows.find((w) => !w.destroyed) ?? null) as unknown as AppWindow | null,

@@ -9,6 +9,17 @@ import { APP_PAGE_URL } from '../security/app-protocol.js';
 import { fakeElectron, manualTimers, type FakeElectron, type FakeWindow } from './fake-electron.js';
 import { nodeFileSystem } from '../files/file-system.js';
 import { securityViolations } from '../security/web-preferences.js';
+import { REPORT_PAGE_URL } from '../report/briefing-pdf.js';
+import { DEMO_SCENARIO } from '../../schedules/demo/demo-scenario.js';
+
+const BRIEFING = {
+  kind: 'zeitlight-briefing',
+  paper: 'A4',
+  generatedOn: '2026-03-30',
+  zeitlightVersion: '0.1.0',
+  scenario: structuredClone(DEMO_SCENARIO),
+  view: { baselineId: 'baseline', days: 14, startDate: '2026-03-23', strategies: [], personas: [], runs: [] },
+};
 
 async function setup(userData?: string) {
   const root = await mkdtemp(path.join(tmpdir(), 'zeitlight-app-'));
@@ -152,16 +163,47 @@ describe('desktop app controller', () => {
     expect(await readdir(path.join(first.data, 'recovery'))).toEqual([]);
   });
 
-  it('exports CSV text and a PDF of the window to the chosen files', async () => {
+  it('exports CSV text and the briefing PDF to the chosen files, with progress sent to the asking window', async () => {
     const { fake, app, root } = await setup();
     await app.start({ files: [], demo: true });
     const w = last(fake);
     expect(await fake.invoke(w, 'document:initial')).toEqual({ kind: 'demo' });
     fake.saveDialogAnswers.push(path.join(root, 'compare.csv'), path.join(root, 'briefing.pdf'));
     await fake.invoke(w, 'export:csv', { suggestedName: 'compare.csv', csvText: 'metric,value\n' });
-    await fake.invoke(w, 'export:pdf', { suggestedName: 'briefing.pdf' });
+    const outcome = await fake.invoke(w, 'export:pdf', { suggestedName: 'briefing.pdf', briefing: BRIEFING });
+    expect(outcome).toMatchObject({ status: 'written', path: path.join(root, 'briefing.pdf') });
     expect(await readFile(path.join(root, 'compare.csv'), 'utf8')).toBe('metric,value\n');
     expect((await readFile(path.join(root, 'briefing.pdf'), 'utf8')).startsWith('%PDF')).toBe(true);
+    // Drawn in a hidden report window that is handed the document and destroyed afterwards.
+    const report = fake.reportWindows[0]!;
+    expect(report.loaded).toBe(REPORT_PAGE_URL);
+    expect(report.scripts[0]).toBe(`window.__zeitlightRender(${JSON.stringify(BRIEFING)}); true`);
+    expect(report.destroyed).toBe(true);
+    const progress = w.webContents.sent.filter((m) => m.channel === 'export:progress').map((m) => m.args[0] as { fraction: number; stage: string });
+    expect(progress.length).toBeGreaterThan(2);
+    expect(progress.map((p) => p.fraction)).toEqual([...progress.map((p) => p.fraction)].sort((a, b) => a - b));
+    expect(progress[progress.length - 1]).toEqual({ fraction: 1, stage: 'Done' });
+  });
+
+  it('opens no report window when the save dialog is cancelled, and writes nothing when printing fails', async () => {
+    const { fake, app, root } = await setup();
+    await app.start({ files: [], demo: true });
+    const w = last(fake);
+    fake.saveDialogAnswers.push(null);
+    expect(await fake.invoke(w, 'export:pdf', { suggestedName: 'briefing.pdf', briefing: BRIEFING })).toEqual({ status: 'cancelled' });
+    expect(fake.reportWindows).toHaveLength(0);
+    fake.saveDialogAnswers.push(path.join(root, 'failed.pdf'));
+    const original = fake.modules.createReportWindow;
+    (fake.modules as { createReportWindow: typeof original }).createReportWindow = () => {
+      const r = original();
+      r.webContents.printToPDF = async () => {
+        throw new Error('printer went away');
+      };
+      return r;
+    };
+    expect(await fake.invoke(w, 'export:pdf', { suggestedName: 'briefing.pdf', briefing: BRIEFING })).toMatchObject({ status: 'failed', message: expect.stringContaining('printer went away') });
+    await expect(readdir(root)).resolves.not.toContain('failed.pdf');
+    expect(fake.reportWindows.every((r) => r.destroyed)).toBe(true);
   });
 
   it('sends menu commands to the focused window', async () => {

@@ -16,6 +16,7 @@ import { guardSession, guardWebContents } from '../security/navigation-guard.js'
 import { APP_PAGE_URL } from '../security/app-protocol.js';
 import { registerIpcHandlers, type ChannelHandlers } from '../ipc/register-handlers.js';
 import { buildMenuTemplate } from '../menu/menu-template.js';
+import { printBriefingPdf } from '../report/briefing-pdf.js';
 
 export const APP_NAME = 'Zeitlight';
 
@@ -161,10 +162,12 @@ export class ZeitlightApp {
       },
       'export:pdf': async (event, request) => {
         const state = this.stateFor(event);
-        return this.writeChosenFile(request.suggestedName, [{ name: 'PDF', extensions: ['pdf'] }], async () => {
-          const pdf = await state.window.webContents.printToPDF({ pageSize: 'A4', printBackground: true });
-          return new Uint8Array(pdf);
-        });
+        const progress = (fraction: number, stage: string) => {
+          if (!state.window.isDestroyed()) state.window.webContents.send('export:progress', { fraction, stage });
+        };
+        // The briefing is drawn on the report page in a hidden window and printed there
+        // (report/briefing-pdf.ts); the file is written only once the PDF exists.
+        return this.writeChosenFile(request.suggestedName, [{ name: 'PDF', extensions: ['pdf'] }], () => printBriefingPdf(this.electron.createReportWindow(), request.briefing, progress));
       },
     };
   }

@@ -2,6 +2,18 @@ import { describe, expect, it } from 'vitest';
 import { checkChannelArguments } from './channel-arguments.js';
 import { registerIpcHandlers, type ChannelHandlers } from './register-handlers.js';
 import type { IpcMainInvokeEvent } from 'electron';
+import { DEMO_SCENARIO } from '../../schedules/demo/demo-scenario.js';
+
+/** A briefing as the workspace sends it (view trimmed to its required fields). */
+const briefing = (patch: Record<string, unknown> = {}) => ({
+  kind: 'zeitlight-briefing',
+  paper: 'A4',
+  generatedOn: '2026-03-30',
+  zeitlightVersion: '0.1.0',
+  scenario: structuredClone(DEMO_SCENARIO),
+  view: { baselineId: 'baseline', days: 14, startDate: '2026-03-23', strategies: [], personas: [], runs: [] },
+  ...patch,
+});
 
 describe('IPC argument validation', () => {
   it('accepts a well-formed save request', () => {
@@ -16,12 +28,22 @@ describe('IPC argument validation', () => {
     ['arguments on an argument-less channel', 'document:open', ['/tmp/x']],
     ['a CSV name with a folder', 'export:csv', [{ suggestedName: '../../evil.csv', csvText: 'a' }]],
     ['a CSV name with a Windows folder', 'export:csv', [{ suggestedName: 'C:\\x.csv', csvText: 'a' }]],
-    ['a PDF name with the wrong extension', 'export:pdf', [{ suggestedName: 'briefing.exe' }]],
-    ['a name with a control character', 'export:pdf', [{ suggestedName: 'brief\u0007ing.pdf' }]],
+    ['a PDF name with the wrong extension', 'export:pdf', [{ suggestedName: 'briefing.exe', briefing: briefing() }]],
+    ['a name with a control character', 'export:pdf', [{ suggestedName: 'brief\u0007ing.pdf', briefing: briefing() }]],
+    ['a PDF export without its briefing', 'export:pdf', [{ suggestedName: 'briefing.pdf' }]],
+    ['a briefing of another kind', 'export:pdf', [{ suggestedName: 'briefing.pdf', briefing: briefing({ kind: 'zeitlight-results' }) }]],
+    ['a briefing on an unknown paper size', 'export:pdf', [{ suggestedName: 'briefing.pdf', briefing: briefing({ paper: 'A3' }) }]],
+    ['a briefing whose scenario is not a Zeitlight scenario', 'export:pdf', [{ suggestedName: 'briefing.pdf', briefing: briefing({ scenario: { format: 'other' } }) }]],
+    ['a briefing without results', 'export:pdf', [{ suggestedName: 'briefing.pdf', briefing: briefing({ view: { baselineId: 'baseline' } }) }]],
+    ['a briefing with an extra field', 'export:pdf', [{ suggestedName: 'briefing.pdf', briefing: briefing({ script: 'alert(1)' }) }]],
   ] as const)('rejects %s', (_what, channel, args) => {
     const check = checkChannelArguments(channel, args);
     expect(check.ok).toBe(false);
     if (!check.ok) expect(check.message).toContain(channel);
+  });
+
+  it('accepts a briefing with the scenario, its results view and cohort ranges', () => {
+    expect(checkChannelArguments('export:pdf', [{ suggestedName: 'briefing.pdf', briefing: briefing({ cohort: { occupants: 200, seed: 1, ranges: [] } }) }])).toMatchObject({ ok: true });
   });
 
   it('rejects a scenario text above the size limit', () => {

@@ -3,7 +3,7 @@
 // channel and field.
 import { z } from 'zod';
 import type { InvokeChannel, InvokeChannels } from '../../types/desktop-api.js';
-import { MAX_SCENARIO_CHARS } from './scenario-check.js';
+import { checkScenarioText, MAX_SCENARIO_CHARS } from './scenario-check.js';
 
 /** A bare file name: no directory parts, no control characters, sensible length. */
 const bareFileName = (extension: string) =>
@@ -20,7 +20,37 @@ const scenarioText = z.string().max(MAX_SCENARIO_CHARS);
 const saveRequest = z.strictObject({ text: scenarioText, mode: z.enum(['save', 'save-as']) });
 const editReport = z.strictObject({ dirty: z.boolean(), text: scenarioText });
 const csvExport = z.strictObject({ suggestedName: bareFileName('.csv'), csvText: z.string().max(200_000_000) });
-const pdfExport = z.strictObject({ suggestedName: bareFileName('.pdf') });
+/** Largest briefing document main prints, in characters of JSON (a two-week, many-strategy view stays well below). */
+export const MAX_BRIEFING_CHARS = 200_000_000;
+
+const plainRecord = z.record(z.string(), z.unknown());
+/** The scenario inside a briefing passes the same identity check as a file being opened. */
+const briefingScenario = plainRecord.superRefine((value, ctx) => {
+  const check = checkScenarioText(JSON.stringify(value), 'briefing scenario');
+  if (!check.ok) ctx.addIssue({ code: 'custom', message: check.problems[0] ?? 'is not a Zeitlight scenario' });
+});
+const briefingView = z.looseObject({
+  baselineId: z.string().max(64),
+  days: z.number().int().min(1).max(366),
+  startDate: z.string().regex(/^\d{4}-\d{2}-\d{2}$/),
+  strategies: z.array(z.unknown()).max(1000),
+  personas: z.array(z.unknown()).max(1000),
+  runs: z.array(z.unknown()).max(100_000),
+});
+const briefingCohort = z.looseObject({ occupants: z.number().int().min(1).max(1_000_000), seed: z.number().int().nullable(), ranges: z.array(z.unknown()).max(100_000) });
+const briefingRequest = z
+  .strictObject({
+    kind: z.literal('zeitlight-briefing'),
+    paper: z.enum(['A4', 'Letter']),
+    generatedOn: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'must be a date YYYY-MM-DD'),
+    zeitlightVersion: z.string().min(1).max(40),
+    client: z.string().max(500).optional(),
+    scenario: briefingScenario,
+    view: briefingView,
+    cohort: briefingCohort.optional(),
+  })
+  .refine((doc) => JSON.stringify(doc).length <= MAX_BRIEFING_CHARS, `must be at most ${MAX_BRIEFING_CHARS} characters of JSON`);
+const pdfExport = z.strictObject({ suggestedName: bareFileName('.pdf'), briefing: briefingRequest });
 
 type ArgsSchema<C extends InvokeChannel> = z.ZodType<InvokeChannels[C]['args']>;
 

@@ -113,7 +113,7 @@ export function App() {
           <button type="button" className="button" onClick={() => void controller.exportCsv()}>
             Export CSV
           </button>
-          <button type="button" className="button" onClick={() => void controller.exportPdf()}>
+          <button type="button" className="button" onClick={() => void controller.exportPdf()} disabled={state.exportProgress !== null}>
             Briefing PDF
           </button>
         </nav>
@@ -121,6 +121,14 @@ export function App() {
       {state.progressVisible && results.status === 'running' && (
         <div className="progress" role="progressbar" aria-label="Simulation progress" aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(results.fraction * 100)}>
           <span style={{ width: `${Math.max(3, results.fraction * 100)}%` }} />
+        </div>
+      )}
+      {state.exportProgress !== null && (
+        <div className="export-progress" role="status" aria-label="Briefing export">
+          <span>Briefing: {state.exportProgress.stage}</span>
+          <div className="progress" role="progressbar" aria-label="Briefing export progress" aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(state.exportProgress.fraction * 100)}>
+            <span style={{ width: `${Math.max(3, state.exportProgress.fraction * 100)}%` }} />
+          </div>
         </div>
       )}
       <div className="body">

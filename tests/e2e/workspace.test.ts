@@ -201,6 +201,20 @@ describe.skipIf(!available)('results views of the demo run', () => {
     expect(tunable?.[6]).toMatch(/than baseline|no change/);
   });
 
+  it('prints the briefing from the report page with the current results, showing export progress', async () => {
+    const [popup] = await Promise.all([s.page.waitForEvent('popup', { timeout: 60_000 }), s.page.getByRole('button', { name: 'Briefing PDF' }).click()]);
+    await popup.waitForFunction(() => (window as { __zeitlightPrint?: { status: string } }).__zeitlightPrint?.status === 'ready', null, { timeout: 120_000 });
+    const text = await popup.locator('body').innerText();
+    expect(text).toContain('Mara Quellbrook');
+    expect(text).toContain('Tunable white: brighter day, warmer afternoon');
+    expect(text).toMatch(/not diagnosis or treatment/);
+    await popup.setViewportSize({ width: 900, height: 1200 });
+    await screenshot(popup, 'briefing-report-page');
+    await poll(() => s.page.getByRole('status').filter({ hasText: 'Exported the briefing' }).count(), { timeout: 60_000 }).toBe(1);
+    await expect(s.page.getByRole('button', { name: 'Briefing PDF' }).isEnabled()).resolves.toBe(true);
+    await popup.close();
+  }, 300_000);
+
   it('reports no script or Content-Security-Policy errors', () => {
     expect(s.consoleErrors).toEqual([]);
   });

@@ -9,6 +9,8 @@ import { RunScheduler } from '../worker/run-scheduler.js';
 import type { PageToWorker, WorkerToPage } from '../worker/simulation-protocol.js';
 import { resultsComparisonCsv } from '../charts/comparison-csv.js';
 import type { ResultsView } from '../results/view-model.js';
+import { briefingRequest } from '../briefing/briefing-request.js';
+import type { CohortSummary } from '../../report/src/briefing-document.js';
 import { isDirty, WorkspaceStore } from './workspace-store.js';
 
 const EDIT_REPORT_DELAY_MS = 500;
@@ -114,10 +116,32 @@ export class WorkspaceController {
     else if (outcome.status === 'failed') this.store.notify(outcome.message, 'error');
   }
 
+  /** Prints the client briefing of the results on screen (cohort ranges included when a cohort was run). */
   async exportPdf(): Promise<void> {
-    const outcome = await this.api.exportPdf({ suggestedName: 'briefing.pdf' });
-    if (outcome.status === 'failed') this.store.notify(outcome.message, 'error');
+    const state = this.store.getSnapshot();
+    const view = this.shownView();
+    if (state.history.present === null || view === null) {
+      this.store.notify('There are no results for a briefing yet.', 'error');
+      return;
+    }
+    if (state.exportProgress !== null) return;
+    const briefing = briefingRequest(state.history.present, view, { now: new Date(), cohort: this.briefingCohort() });
+    this.store.setExportProgress({ fraction: 0, stage: 'Preparing the briefing' });
+    const stop = this.api.onExportProgress((p) => this.store.setExportProgress(p));
+    try {
+      const outcome = await this.api.exportPdf({ suggestedName: 'briefing.pdf', briefing });
+      if (outcome.status === 'written') this.store.notify(`Exported ${outcome.displayName}.`);
+      else if (outcome.status === 'failed') this.store.notify(outcome.message, 'error');
+    } catch (error) {
+      this.store.notify(`Briefing: ${error instanceof Error ? error.message : String(error)}`, 'error');
+    } finally {
+      stop();
+      this.store.setExportProgress(null);
+    }
   }
+
+  /** Cohort ranges for the briefing; set by the cohort view when a cohort has finished. */
+  briefingCohort: () => CohortSummary | null = () => null;
 
   /** Web mode: the usual shortcuts (the desktop app's menu accelerators do this there). */
   handleKey(event: KeyboardEvent): void {

@@ -23,6 +23,8 @@ export interface WorkspaceState {
   readonly problems: readonly ScenarioProblem[];
   readonly results: ResultsState;
   readonly progressVisible: boolean;
+  /** Progress of a briefing export under way, else null. */
+  readonly exportProgress: { readonly fraction: number; readonly stage: string } | null;
   readonly notice: { readonly text: string; readonly tone: 'info' | 'error' } | null;
 }
 
@@ -41,6 +43,7 @@ export class WorkspaceStore {
     problems: [],
     results: { status: 'idle' },
     progressVisible: false,
+    exportProgress: null,
     notice: null,
   };
   private readonly listeners = new Set<Listener>();
@@ -93,6 +96,10 @@ export class WorkspaceStore {
 
   setProgressVisible(progressVisible: boolean): void {
     this.set({ progressVisible });
+  }
+
+  setExportProgress(exportProgress: WorkspaceState['exportProgress']): void {
+    this.set({ exportProgress });
   }
 
   notify(text: string, tone: 'info' | 'error' = 'info'): void {
