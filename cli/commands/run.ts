@@ -60,23 +60,23 @@ function wholeNumber(ctx: CommandContext, name: string, min: number, max: number
   return n;
 }
 
-/** --cohort n --seed s [--workers w]; the seed is required so that a cohort can be repeated. */
-function cohortOptions(ctx: CommandContext): { size: number; seed: number; workers?: number } | undefined {
+/** --cohort n --seed s [--workers w] [--until-stable]; the seed is required so that a cohort can be repeated. */
+function cohortOptions(ctx: CommandContext): { size: number; seed: number; workers?: number; untilStable?: boolean } | undefined {
   const size = wholeNumber(ctx, 'cohort', 1, 100_000);
   const seed = wholeNumber(ctx, 'seed', 0, Number.MAX_SAFE_INTEGER);
   const workers = wholeNumber(ctx, 'workers', 1, 256);
   if (size === undefined) {
-    if (seed !== undefined || workers !== undefined) throw new UsageError('--seed and --workers go with --cohort <n>');
+    if (seed !== undefined || workers !== undefined || ctx.values['until-stable'] === true) throw new UsageError('--seed, --workers and --until-stable go with --cohort <n>');
     return undefined;
   }
   if (seed === undefined) throw new UsageError('--cohort needs --seed <s> (any whole number ≥ 0) so that the same virtual occupants can be drawn again');
-  return { size, seed, ...(workers !== undefined ? { workers } : {}) };
+  return { size, seed, ...(workers !== undefined ? { workers } : {}), ...(ctx.values['until-stable'] === true ? { untilStable: true } : {}) };
 }
 
 export const runCommand: Command = {
   name: 'run',
   summary: 'Run a scenario and write results',
-  usage: '<scenario.json> --out <dir> [--force] [--pdf [--paper A4|Letter] [--chromium <path>]] [--cohort <n> --seed <s> [--workers <n>]] [--json]',
+  usage: '<scenario.json> --out <dir> [--force] [--pdf [--paper A4|Letter] [--chromium <path>]] [--cohort <n> --seed <s> [--workers <n>] [--until-stable]] [--json]',
   options: {
     out: { type: 'string' },
     force: { type: 'boolean' },
@@ -86,6 +86,7 @@ export const runCommand: Command = {
     cohort: { type: 'string' },
     seed: { type: 'string' },
     workers: { type: 'string' },
+    'until-stable': { type: 'boolean' },
   },
   async run(ctx: CommandContext): Promise<number> {
     const [file] = positionals(ctx, ['scenario.json']);

@@ -10,7 +10,7 @@ import type { Scenario } from '../../schedules/index.js';
 import { exposureCsv, runScenario, RunInputError, summaryCsv, type RunInput, type RunResults } from '../../schedules/run/index.js';
 import { prepareOutputFolder, writeFilesAtomically } from './output-folder.js';
 import { writeBriefing } from './briefing-pdf.js';
-import { runCohorts } from './cohort-runs.js';
+import { COHORT_STOP_RULE, runCohorts } from './cohort-runs.js';
 
 export interface RunAndWriteOptions {
   readonly input: RunInput;
@@ -23,7 +23,7 @@ export interface RunAndWriteOptions {
   readonly extraFiles?: Readonly<Record<string, string>>;
   readonly scenarioForReport: unknown;
   /** Also run a cohort of virtual occupants per persona. */
-  readonly cohort?: { readonly size: number; readonly seed: number; readonly workers?: number };
+  readonly cohort?: { readonly size: number; readonly seed: number; readonly workers?: number; readonly untilStable?: boolean };
 }
 
 function runOrExplain(input: RunInput): ReturnType<typeof runScenario> {
@@ -41,7 +41,11 @@ export async function runAndWrite(ctx: CommandContext, o: RunAndWriteOptions): P
   const single = runOrExplain(o.input);
   let results: RunResults = single.results;
   if (o.cohort !== undefined) {
-    const cohort = await runCohorts(o.input, o.cohort.size, o.cohort.seed, o.cohort.workers, ctx.json ? undefined : (text) => ctx.stderr(`\r${text}   `));
+    const cohort = await runCohorts(o.input, o.cohort.size, o.cohort.seed, {
+      ...(o.cohort.workers !== undefined ? { workers: o.cohort.workers } : {}),
+      ...(o.cohort.untilStable === true ? { stopRule: COHORT_STOP_RULE } : {}),
+      ...(ctx.json ? {} : { onProgress: (text: string) => ctx.stderr(`\r${text}   `) }),
+    });
     if (!ctx.json) ctx.stderr('\n');
     results = { ...results, cohort };
   }

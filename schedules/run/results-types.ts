@@ -144,6 +144,13 @@ export interface CohortResults {
   /** Summary metric names summarised per strategy. */
   readonly metrics: readonly string[];
   /** Per persona: strategy id → metric → { n, missing, median, q25, q75, iqr, p05, p95 } (null without finite values). */
-  readonly personas: readonly { readonly id: string; readonly summary: CohortSummary }[];
+  readonly personas: readonly {
+    readonly id: string;
+    readonly summary: CohortSummary;
+    /** Occupants actually run (fewer than size when the stop rule ended the cohort early). */
+    readonly occupants_run?: number;
+    /** Occupant count at which the stop rule held, or null (no rule, or never settled). */
+    readonly converged_at?: number | null;
+  }[];
   readonly note: string;
 }

@@ -1,0 +1,88 @@
+/**
+ * Cohort runs without recomputing light: the light at the eye of a persona under each strategy
+ * depends on the scenario, the strategy and the observer's age, not on the body-clock traits. So
+ * a persona is prepared once (the whole pipeline, `runScenario`, for that persona only) and each
+ * virtual occupant then runs just the body-clock models and the metrics for every strategy, with
+ * its own intrinsic period, light sensitivity and habitual sleep timing. An occupant of another
+ * age needs its own preparation (lens transmission differs per source spectrum, CIE S 026).
+ * With the persona's own traits and no sleep shift the strategy summaries equal runScenario's
+ * bit for bit (same calls in the same order).
+ */
+import type { PacemakerId } from '../../model/circadian/registry.js';
+import { DEFAULT_PACEMAKER_ID } from '../../model/circadian/registry.js';
+import type { SleepSpec } from '../../model/circadian/sleep-input.js';
+import type { SimState } from '../../model/circadian/simulate.js';
+import type { Persona } from '../schema/scenario-types.js';
+import type { ExposureTimeline } from '../timeline/exposure-types.js';
+import { entrainedStart, pacemakerFor, runBodyClockFor, sleepSpecFor } from './body-clock-run.js';
+import { fixedAwakeMinutes, shiftedSleepSpec } from './cohort-sleep-shift.js';
+import type { EyeSeries } from './eye-series.js';
+import { mergedLightSeries } from './light-segments.js';
+import type { LocalClock } from './local-clock.js';
+import { strategyMetrics } from './metrics.js';
+import type { StrategySummary } from './results-types.js';
+import { RunInputError } from './run-input-error.js';
+import { runScenario, type RunInput } from './run-scenario.js';
+
+interface PreparedStrategy {
+  readonly id: string;
+  readonly name: string;
+  readonly changes: readonly string[];
+  readonly isBaseline: boolean;
+  readonly timeline: ExposureTimeline;
+  readonly eye: EyeSeries;
+  readonly sleep: SleepSpec;
+  readonly fixedAwake: Uint8Array;
+}
+
+/** One persona's light at the eye per strategy, ready for many occupants. */
+export interface CohortPersonaBase {
+  readonly persona: Persona;
+  readonly modelId: PacemakerId;
+  readonly clock: LocalClock;
+  /** In pipeline order, baseline first. */
+  readonly strategies: readonly PreparedStrategy[];
+}
+
+/** The body-clock traits of one occupant (model/cohort OccupantTraits, clamped to the scenario's limits). */
+export interface CohortPerson {
+  readonly intrinsicPeriod_h: number;
+  readonly lightSensitivity: number;
+  readonly habitualMidSleepShift_h: number;
+}
+
+export function prepareCohortPersona(input: RunInput, personaId: string, age_y?: number): CohortPersonaBase {
+  const persona0 = input.scenario.personas.find((p) => p.id === personaId);
+  if (persona0 === undefined) throw new RunInputError('personas', `no persona "${personaId}"`);
+  const persona = age_y === undefined ? persona0 : { ...persona0, age_y };
+  const scenario = age_y === undefined ? input.scenario : { ...input.scenario, personas: input.scenario.personas.map((p) => (p.id === personaId ? persona : p)) };
+  const { onProgress: _drop, ...rest } = input;
+  void _drop;
+  const out = runScenario({ ...rest, scenario, personaIds: [personaId] });
+  const result = out.results.personas[0];
+  if (result === undefined) throw new RunInputError('personas', `persona "${personaId}" has no baseline to compare with`);
+  const strategies = result.strategies.map((s) => {
+    const light = out.light.find((l) => l.personaId === personaId && l.strategyId === s.id);
+    if (light === undefined) throw new RunInputError('strategies', `no light series for strategy "${s.id}"`);
+    return { id: s.id, name: s.name, changes: s.changes, isBaseline: s.is_baseline, timeline: light.timeline, eye: light.eye, sleep: sleepSpecFor(persona, light.timeline), fixedAwake: fixedAwakeMinutes(light.timeline) };
+  });
+  return { persona, modelId: input.modelId ?? DEFAULT_PACEMAKER_ID, clock: out.clock, strategies };
+}
+
+/** Strategy summaries (as in results.json) of one occupant, by strategy id. */
+export function runCohortOccupant(base: CohortPersonaBase, person: CohortPerson): Record<string, StrategySummary> {
+  const persona: Persona = { ...base.persona, intrinsicPeriod_h: person.intrinsicPeriod_h, lightSensitivity: person.lightSensitivity };
+  const model = pacemakerFor(persona, base.modelId);
+  const out: Record<string, StrategySummary> = {};
+  let initial: SimState | undefined;
+  let baselineCbt: number[] | undefined;
+  for (const s of base.strategies) {
+    const sleep = shiftedSleepSpec(s.sleep, s.timeline, person.habitualMidSleepShift_h, s.fixedAwake);
+    if (s.isBaseline) initial = entrainedStart(model, mergedLightSeries(s.eye.mel_edi_lx), sleep);
+    const bc = runBodyClockFor(model, s.eye.mel_edi_lx, sleep, initial, s.timeline.total_min);
+    if (s.isBaseline) baselineCbt = bc.outcome.cbtmin_h;
+    const m = strategyMetrics({ id: s.id, name: s.name, changes: s.changes, timeline: s.timeline, clock: base.clock, eye: s.eye, clockOutcome: bc.outcome, rhsEvaluations: bc.run.rhsEvaluations, baselineCbtmin_h: s.isBaseline ? undefined : baselineCbt });
+    out[s.id] = m.summary;
+  }
+  return out;
+}
