@@ -1,5 +1,5 @@
 // The workspace: build the scenario on the left (Site, Places, People, Strategies), read the
-// results (Light at the eye, Body clock, Melatonin, Sleepiness, Sleep, Compare).
+// results (Light at the eye, Body clock, Melatonin, Sleepiness, Sleep, Compare, Cohort).
 import { useEffect, useState } from 'react';
 import { useController, useWorkspace } from './state/workspace-context.js';
 import { isDirty } from './state/workspace-store.js';
@@ -16,8 +16,9 @@ import { SleepinessView } from './views/SleepinessView.js';
 import { SleepView } from './views/SleepView.js';
 import { CompareView } from './views/CompareView.js';
 import { ProblemsList } from './components/ProblemsList.js';
+import { CohortView } from './views/CohortView.js';
 
-type ViewId = 'site' | 'places' | 'people' | 'strategies' | 'light' | 'clock' | 'melatonin' | 'sleepiness' | 'sleep' | 'compare';
+type ViewId = 'site' | 'places' | 'people' | 'strategies' | 'light' | 'clock' | 'melatonin' | 'sleepiness' | 'sleep' | 'compare' | 'cohort';
 
 const BUILD: readonly { id: ViewId; label: string }[] = [
   { id: 'site', label: 'Site' },
@@ -145,6 +146,9 @@ export function App() {
               {r.label}
             </button>
           ))}
+          <button type="button" className={view === 'cohort' ? 'nav-item nav-active' : 'nav-item'} aria-current={view === 'cohort' ? 'page' : undefined} onClick={() => setView('cohort')}>
+            Cohort
+          </button>
           <div className="nav-footer">
             <span className={`run-state run-${results.status}`}>
               {results.status === 'ready' ? 'Results up to date' : results.status === 'running' ? 'Simulating…' : results.status === 'failed' ? 'Needs fixes' : results.status === 'unavailable' ? 'Engine not connected' : 'Idle'}
@@ -157,6 +161,7 @@ export function App() {
           {view === 'places' && <PlacesPanel scenario={scenario} />}
           {view === 'people' && <PeoplePanel scenario={scenario} />}
           {view === 'strategies' && <StrategiesPanel scenario={scenario} />}
+          {view === 'cohort' && <CohortView scenario={scenario} />}
           {resultsEntry !== undefined && (
             <ResultsFrame title={resultsEntry.label} lead={resultsEntry.lead} results={results} selection={selection} onSelect={setSelection} showDay={resultsEntry.day}>
               {(v, personaId) => {

@@ -10,6 +10,9 @@ import type { PageToWorker, WorkerToPage } from '../worker/simulation-protocol.j
 import { resultsComparisonCsv } from '../charts/comparison-csv.js';
 import type { ResultsView } from '../results/view-model.js';
 import { briefingRequest } from '../briefing/briefing-request.js';
+import { CohortRunner } from '../cohort/cohort-runner.js';
+import { briefingCohort } from '../cohort/cohort-ranges.js';
+import { createCohortWorker } from '../cohort/web-cohort-worker.js';
 import type { CohortSummary } from '../../report/src/briefing-document.js';
 import { isDirty, WorkspaceStore } from './workspace-store.js';
 
@@ -28,6 +31,8 @@ function parseScenario(text: string): ScenarioInput | string {
 
 export class WorkspaceController {
   readonly store = new WorkspaceStore();
+  /** Cohort runs on navigator.hardwareConcurrency Web Workers. */
+  readonly cohort = new CohortRunner(createCohortWorker, () => (typeof navigator === 'undefined' ? 2 : navigator.hardwareConcurrency || 2));
   private worker: Worker | null = null;
   private readonly scheduler: RunScheduler;
   private lastRunScenario: ScenarioInput | null = null;
@@ -140,8 +145,13 @@ export class WorkspaceController {
     }
   }
 
-  /** Cohort ranges for the briefing; set by the cohort view when a cohort has finished. */
-  briefingCohort: () => CohortSummary | null = () => null;
+  /** Cohort ranges for the briefing: the finished cohort of the scenario as it is now, if any. */
+  briefingCohort(): CohortSummary | null {
+    const c = this.cohort.getSnapshot();
+    const view = this.shownView();
+    if (c.status !== 'done' || view === null || c.scenario !== this.store.getSnapshot().history.present || c.outcome.personas.length === 0) return null;
+    return briefingCohort(c.outcome.personas, view.strategies, c.settings.seed);
+  }
 
   /** Web mode: the usual shortcuts (the desktop app's menu accelerators do this there). */
   handleKey(event: KeyboardEvent): void {

@@ -1,0 +1,53 @@
+import { describe, expect, it } from 'vitest';
+import { DEMO_SCENARIO } from '../../../schedules/demo/demo-scenario.js';
+import { validateScenarioValue } from '../../../schedules/validation/validate-scenario.js';
+import type { Scenario } from '../../../schedules/schema/scenario-types.js';
+import { populationCohortSpread, zeroCohortSpread } from '../../../model/cohort/occupant-traits.js';
+import { runScenario } from '../../../schedules/run/index.js';
+import { cohortWorkerHandler } from './cohort-in-worker.js';
+import type { CohortWorkerToPage } from './cohort-protocol.js';
+import { occupantScenario, runOccupantJob } from './occupant-job.js';
+
+function deskScenario(): Scenario {
+  const input = structuredClone(DEMO_SCENARIO);
+  const small = { ...input, personas: input.personas.filter((p) => p.id === 'desk-worker'), strategies: (input.strategies ?? []).filter((s) => s.id === 'office-tunable-white') };
+  const checked = validateScenarioValue(small);
+  if (!checked.ok || checked.scenario === undefined) throw new Error('demo subset invalid');
+  return checked.scenario;
+}
+
+describe('a virtual occupant', () => {
+  it('with zero spread is the persona itself: same numbers as the single-person run', () => {
+    const scenario = deskScenario();
+    const outcome = runOccupantJob(scenario, { personaId: 'desk-worker', seed: 3, occupantIndex: 5, spread: zeroCohortSpread() });
+    const single = runScenario({ scenario, personaIds: ['desk-worker'] }).results.personas[0]!;
+    const tunable = single.strategies.find((s) => s.id === 'office-tunable-white')!;
+    expect(outcome.byStrategy['office-tunable-white']?.phaseShift_h).toBe(tunable.summary.mean_phase_shift_h);
+    expect(outcome.byStrategy['office-tunable-white']?.melatoninSuppression_pct).toBe(tunable.summary.mean_melatonin_suppression_pct);
+    expect(Object.keys(outcome.byStrategy).sort()).toEqual(['baseline', 'office-tunable-white']);
+  }, 120_000);
+
+  it('varies intrinsic period and light sensitivity within the scenario limits, the same for the same seed and index', () => {
+    const scenario = deskScenario();
+    const spread = populationCohortSpread(null);
+    const a = occupantScenario(scenario, { personaId: 'desk-worker', seed: 11, occupantIndex: 2, spread }).personas[0]!;
+    const b = occupantScenario(scenario, { personaId: 'desk-worker', seed: 11, occupantIndex: 2, spread }).personas[0]!;
+    const c = occupantScenario(scenario, { personaId: 'desk-worker', seed: 11, occupantIndex: 3, spread }).personas[0]!;
+    expect(a).toEqual(b);
+    expect(a.intrinsicPeriod_h).not.toBe(c.intrinsicPeriod_h);
+    for (const p of [a, c]) {
+      expect(p.intrinsicPeriod_h).toBeGreaterThanOrEqual(23);
+      expect(p.intrinsicPeriod_h).toBeLessThanOrEqual(25.5);
+      expect(p.lightSensitivity).toBeGreaterThanOrEqual(0.05);
+      expect(p.lightSensitivity).toBeLessThanOrEqual(20);
+    }
+  });
+
+  it('in the worker: a scenario with problems answers each job with a failure naming it', () => {
+    const posted: CohortWorkerToPage[] = [];
+    const handle = cohortWorkerHandler((m) => posted.push(m));
+    handle({ type: 'init', scenario: { format: 'zeitlight-scenario' } });
+    handle({ type: 'job', job: { personaId: 'x', seed: 1, occupantIndex: 0, spread: zeroCohortSpread() } });
+    expect(posted).toEqual([{ type: 'failed', personaId: 'x', occupantIndex: 0, message: 'the scenario has problems to fix first' }]);
+  });
+});
