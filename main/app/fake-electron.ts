@@ -183,7 +183,7 @@ export function fakeElectron(appPageUrl: string, platform: NodeJS.Platform = 'li
 
 /** Timers driven by the test: `tick()` runs every registered interval once. */
 export function manualTimers(start = new Date('2026-03-01T09:00:00Z')): Timers & { tick(): Promise<void>; active: number } {
-  const callbacks = new Map<number, () => void>();
+  const callbacks = new Map<number, () => unknown>();
   let next = 1;
   let now = start.getTime();
   return {
@@ -201,8 +201,8 @@ export function manualTimers(start = new Date('2026-03-01T09:00:00Z')): Timers &
     now: () => new Date(now),
     tick: async () => {
       now += 20_000;
-      for (const cb of callbacks.values()) cb();
-      await new Promise((r) => setTimeout(r, 5));
+      // Await whatever each callback started (e.g. a recovery write), however slow the disk.
+      await Promise.all([...callbacks.values()].map((cb) => cb()));
     },
   };
 }

@@ -6,7 +6,8 @@ import type { RecoveryStore } from './recovery-store.js';
 export const AUTOSAVE_INTERVAL_MS = 20_000;
 
 export interface Timers {
-  setInterval(callback: () => void, ms: number): unknown;
+  /** The callback's promise (if any) is ignored by real timers and awaited by test timers. */
+  setInterval(callback: () => unknown, ms: number): unknown;
   clearInterval(handle: unknown): void;
   now(): Date;
 }
@@ -31,7 +32,7 @@ export class Autosaver {
   ) {}
 
   start(): void {
-    if (this.handle === null) this.handle = this.timers.setInterval(() => void this.flush(), this.intervalMs);
+    if (this.handle === null) this.handle = this.timers.setInterval(() => this.flush(), this.intervalMs);
   }
 
   /** Records the latest state; clean documents need no recovery copy. */
