@@ -1,4 +1,4 @@
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { mkdtemp, readFile, writeFile, readdir } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import * as path from 'node:path';
@@ -111,15 +111,14 @@ describe('desktop app controller', () => {
 
     fake.messageBoxAnswers.push(2); // Cancel
     w.close();
-    await new Promise((r) => setTimeout(r, 5));
+    await vi.waitFor(() => expect(fake.messageBoxes).toHaveLength(1), { timeout: 10_000 });
     expect(w.destroyed).toBe(false);
     expect(fake.messageBoxes[0]?.buttons).toEqual(['Save', 'Close without saving', 'Cancel']);
 
     fake.messageBoxAnswers.push(0); // Save
     fake.saveDialogAnswers.push(path.join(root, 'kept.zeitlight'));
     w.close();
-    await new Promise((r) => setTimeout(r, 20));
-    expect(w.destroyed).toBe(true);
+    await vi.waitFor(() => expect(w.destroyed).toBe(true), { timeout: 10_000 });
     expect(await readFile(path.join(root, 'kept.zeitlight'), 'utf8')).toBe('{"format":"zeitlight-scenario","version":2,"x":1}');
     expect(app.openWindowCount()).toBe(0);
   });
