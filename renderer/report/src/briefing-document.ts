@@ -15,7 +15,10 @@ export interface CohortMetricRange {
   readonly unit: string;
   readonly decimals: number;
   readonly p05: number | null;
+  /** Quartiles (the interquartile band), when known. */
+  readonly q25?: number | null;
   readonly median: number | null;
+  readonly q75?: number | null;
   readonly p95: number | null;
 }
 

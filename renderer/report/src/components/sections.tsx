@@ -1,7 +1,8 @@
 // The briefing's sections, in print order. Each section starts on a new page where it reads
 // better; figures and tables never break across pages (print.css).
 import type { ReactNode } from 'react';
-import type { BriefingDocument } from '../briefing-document.js';
+import type { BriefingDocument, CohortMetricRange } from '../briefing-document.js';
+import { cohortFromResults } from '../cohort-ranges.js';
 import type { ResultsView } from '../../../src/results/view-model.js';
 import type { PersonaSummary, StrategyHeadline } from '../headlines.js';
 import type { ScenarioFacts } from '../scenario-facts.js';
@@ -182,14 +183,38 @@ export function Modelled({ facts }: { facts: ScenarioFacts }) {
   );
 }
 
+/** 5–95 % whisker, interquartile box and median tick on a scale shared by the rows of one person and metric. */
+function CohortBand({ r, lo, hi }: { r: CohortMetricRange; lo: number; hi: number }) {
+  const w = 120;
+  const x = (v: number) => (hi > lo ? 4 + ((v - lo) / (hi - lo)) * (w - 8) : w / 2);
+  if (r.p05 === null || r.p95 === null || r.median === null) return null;
+  const q25 = r.q25 ?? null;
+  const q75 = r.q75 ?? null;
+  return (
+    <svg className="cohort-band" width={w} height={12} viewBox={`0 0 ${w} 12`} role="img" aria-label={`${r.label}: 5–95 % ${formatNumber(r.p05, r.decimals)} to ${formatNumber(r.p95, r.decimals)} ${r.unit}`}>
+      <line x1={x(r.p05)} x2={x(r.p95)} y1={6} y2={6} stroke="#555" strokeWidth={1} />
+      {q25 !== null && q75 !== null && <rect x={x(q25)} y={2} width={Math.max(1, x(q75) - x(q25))} height={8} fill="#b9c9dd" stroke="#555" strokeWidth={0.6} />}
+      <line x1={x(r.median)} x2={x(r.median)} y1={1} y2={11} stroke="#111" strokeWidth={1.6} />
+    </svg>
+  );
+}
+
 export function CohortSection({ doc, view }: { doc: BriefingDocument; view: ResultsView }) {
-  const cohort = doc.cohort;
+  const cohort = doc.cohort ?? cohortFromResults(doc.results);
   if (cohort === undefined || cohort.ranges.length === 0) return null;
   const name = (list: readonly { id: string; name: string }[], id: string) => list.find((x) => x.id === id)?.name ?? id;
+  const scale = new Map<string, { lo: number; hi: number }>();
+  for (const r of cohort.ranges) {
+    if (r.p05 === null || r.p95 === null) continue;
+    const k = `${r.personaId}\u0000${r.label}`;
+    const s = scale.get(k) ?? { lo: r.p05, hi: r.p95 };
+    scale.set(k, { lo: Math.min(s.lo, r.p05), hi: Math.max(s.hi, r.p95) });
+  }
+  const cell = (v: number | null | undefined, r: CohortMetricRange) => (v === undefined || v === null ? '—' : `${formatNumber(v, r.decimals)} ${r.unit}`);
   return (
     <Section id="cohort" title="Cohort: ranges across virtual occupants">
       <p>
-        {cohort.occupants} virtual occupants were simulated per person and strategy, each with their own intrinsic period, light sensitivity, age and habitual sleep timing drawn around the persona{cohort.seed === null ? '' : ` (seed ${cohort.seed})`}. The table gives the middle 90 % (5th to 95th percentile) and the median.
+        {cohort.occupants} virtual occupants were simulated per person, each under every strategy, with their own intrinsic period, light sensitivity and habitual sleep timing drawn around the persona{cohort.seed === null ? '' : ` (seed ${cohort.seed})`}. The table gives the median, the middle half (25th to 75th percentile, the box in the band) and the middle 90 % (5th to 95th percentile, the line); bands of one person and metric share a scale.
       </p>
       <table className="data keep">
         <thead>
@@ -198,21 +223,30 @@ export function CohortSection({ doc, view }: { doc: BriefingDocument; view: Resu
             <th>Strategy</th>
             <th>Metric</th>
             <th className="num">5th pct.</th>
+            <th className="num">25th</th>
             <th className="num">Median</th>
+            <th className="num">75th</th>
             <th className="num">95th pct.</th>
+            <th>Band</th>
           </tr>
         </thead>
         <tbody>
-          {cohort.ranges.map((r, i) => (
-            <tr key={i}>
-              <td>{name(view.personas, r.personaId)}</td>
-              <td>{name(view.strategies, r.strategyId)}</td>
-              <td>{r.label}</td>
-              <td className="num">{formatNumber(r.p05, r.decimals)} {r.unit}</td>
-              <td className="num">{formatNumber(r.median, r.decimals)} {r.unit}</td>
-              <td className="num">{formatNumber(r.p95, r.decimals)} {r.unit}</td>
-            </tr>
-          ))}
+          {cohort.ranges.map((r, i) => {
+            const s = scale.get(`${r.personaId}\u0000${r.label}`);
+            return (
+              <tr key={i}>
+                <td>{name(view.personas, r.personaId)}</td>
+                <td>{name(view.strategies, r.strategyId)}</td>
+                <td>{r.label}</td>
+                <td className="num">{cell(r.p05, r)}</td>
+                <td className="num">{cell(r.q25, r)}</td>
+                <td className="num">{cell(r.median, r)}</td>
+                <td className="num">{cell(r.q75, r)}</td>
+                <td className="num">{cell(r.p95, r)}</td>
+                <td>{s === undefined ? null : <CohortBand r={r} lo={s.lo} hi={s.hi} />}</td>
+              </tr>
+            );
+          })}
         </tbody>
       </table>
     </Section>
