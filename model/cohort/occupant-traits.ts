@@ -7,8 +7,10 @@
  *    (same meaning as the persona field of the scenario). Equivalent to dividing that person's
  *    ED50 by m. The cohort draws m around the persona's own value.
  *  - age_y: lens transmission in the light-at-the-eye step.
- *  - habitualMidSleepShift_h: added to every habitual sleep and wake time of the persona's routine
- *    (positive = later), sleep duration unchanged.
+ *  - habitualMidSleepShift_h: moves every prescribed sleep episode (week routine or roster-placed;
+ *    positive = later), duration kept except where it would reach work or commute, which stays
+ *    awake; free (model-predicted) sleep is not shifted (schedules/run/cohort-sleep-shift.ts,
+ *    docs/methods/cohort.md §2.4).
  */
 import { HABITUAL_MID_SLEEP_SD_H, INTRINSIC_PERIOD_SD_H, LIGHT_SENSITIVITY_SD_LN } from './population-spread.js';
 
