@@ -1,18 +1,34 @@
 // Places: rooms (windows, blinds, luminaires, screens), vehicles and outdoor places.
+import { useState } from 'react';
 import type { PlaceInput, ScenarioInput } from '../scenario/scenario-types.js';
 import { NumberField, TextField } from '../components/fields.js';
+import { useController } from '../state/workspace-context.js';
+import { addLuminaire, addPlace, luminaireReferences, placeUsers, removeLuminaire, removePlace, type PlaceKind } from '../scenario/place-edits.js';
 
 const KIND_LABEL = { room: 'Room', vehicle: 'Vehicle', outdoors: 'Outdoors' } as const;
 
-function PlaceCard({ place, index }: { place: PlaceInput; index: number }) {
+function usedBy(users: readonly string[]): string {
+  return users.length === 0 ? '' : `Used by ${users.join(', ')}; change that first to remove it.`;
+}
+
+function PlaceCard({ place, index, scenario }: { place: PlaceInput; index: number; scenario: ScenarioInput }) {
+  const controller = useController();
   const base = ['places', index] as const;
+  const refs = placeUsers(scenario, place.id);
+  const label = place.name ?? place.id;
   return (
-    <article className="card place-card" aria-label={place.name ?? place.id}>
+    <article className="card place-card" aria-label={label}>
       <header className="card-header">
         <span className={`tag tag-${place.kind}`}>{KIND_LABEL[place.kind]}</span>
-        <h3>{place.name ?? place.id}</h3>
+        <h3>{label}</h3>
         <code className="id">{place.id}</code>
+        <span className="card-actions">
+          <button type="button" className="button button-small" disabled={refs.length > 0} title={usedBy(refs) || `Remove ${label}`} aria-label={`Remove ${label}`} onClick={() => controller.store.edit((s) => removePlace(s, place.id))}>
+            Remove
+          </button>
+        </span>
       </header>
+      {refs.length > 0 && <p className="small muted">{usedBy(refs)}</p>}
       <div className="field-grid">
         <TextField label="Name" path={[...base, 'name']} value={place.name} wide />
         {place.kind === 'room' && (
@@ -44,6 +60,9 @@ function PlaceCard({ place, index }: { place: PlaceInput; index: number }) {
                 <th scope="col">Spectrum</th>
                 <th scope="col">At the eye</th>
                 <th scope="col">On</th>
+                <th scope="col">
+                  <span className="visually-hidden">Actions</span>
+                </th>
               </tr>
             </thead>
             <tbody>
@@ -54,11 +73,31 @@ function PlaceCard({ place, index }: { place: PlaceInput; index: number }) {
                   <td>
                     <NumberField label={`Illuminance at the eye, ${l.name ?? l.id}`} path={[...base, 'luminaires', li, 'eyeIlluminance_lx']} value={l.eyeIlluminance_lx} unit="lx" min={0} compact />
                   </td>
-                  <td>{(l.schedule ?? []).map((e) => `${e.start}–${e.end}`).join(', ') || 'always'}</td>
+                  <td>{(l.schedule ?? []).map((e) => `${e.start}–${e.end}`).join(', ') || 'off'}</td>
+                  <td>
+                    {(() => {
+                      const lr = luminaireReferences(scenario, place.id, l.id).map((r) => r.replace(/^.*\((.*)\)$/, 'strategy “$1”'));
+                      return (
+                        <button type="button" className="button button-small" disabled={lr.length > 0} title={usedBy(lr) || `Remove ${l.name ?? l.id}`} aria-label={`Remove luminaire ${l.name ?? l.id}`} onClick={() => controller.store.edit((s) => removeLuminaire(s, place.id, l.id))}>
+                          Remove
+                        </button>
+                      );
+                    })()}
+                  </td>
                 </tr>
               ))}
+              {(place.luminaires ?? []).length === 0 && (
+                <tr>
+                  <td colSpan={5} className="muted">
+                    No luminaires.
+                  </td>
+                </tr>
+              )}
             </tbody>
           </table>
+          <button type="button" className="button button-small" onClick={() => controller.store.edit((s) => addLuminaire(s, place.id))}>
+            Add luminaire
+          </button>
           {(place.screens ?? []).length > 0 && (
             <>
               <h4>Screens</h4>
@@ -77,6 +116,33 @@ function PlaceCard({ place, index }: { place: PlaceInput; index: number }) {
   );
 }
 
+function AddPlaceForm() {
+  const controller = useController();
+  const [kind, setKind] = useState<PlaceKind>('room');
+  return (
+    <form
+      className="inline-form"
+      aria-label="Add a place"
+      onSubmit={(e) => {
+        e.preventDefault();
+        controller.store.edit((s) => addPlace(s, kind));
+      }}
+    >
+      <label>
+        Kind
+        <select value={kind} onChange={(e) => setKind(e.target.value as PlaceKind)}>
+          <option value="room">Room</option>
+          <option value="vehicle">Vehicle</option>
+          <option value="outdoors">Outdoors</option>
+        </select>
+      </label>
+      <button type="submit" className="button">
+        Add place
+      </button>
+    </form>
+  );
+}
+
 export function PlacesPanel({ scenario }: { scenario: ScenarioInput }) {
   return (
     <section className="panel" aria-labelledby="places-title">
@@ -86,9 +152,10 @@ export function PlacesPanel({ scenario }: { scenario: ScenarioInput }) {
       </header>
       <div className="card-list">
         {scenario.places.map((place, i) => (
-          <PlaceCard key={place.id} place={place} index={i} />
+          <PlaceCard key={place.id} place={place} index={i} scenario={scenario} />
         ))}
       </div>
+      <AddPlaceForm />
     </section>
   );
 }
