@@ -15,18 +15,18 @@ const results = {
         id: 'desk-worker',
         occupants_run: 40,
         converged_at: null,
-        summary: { occupants: 40, strategies: { baseline: { mean_phase_shift_h: null, work_hours_kss_ge_7_share: d(0, 0.02, 0.05, 0.1, 0.2) }, daylight: { mean_phase_shift_h: d(-0.8, -0.5, -0.4, -0.3, -0.1), work_hours_kss_ge_7_share: d(0, 0.01, 0.03, 0.06, 0.15) } } },
+        summary: { occupants: 40, strategies: { baseline: { mean_phase_shift_h: d(0, 0, 0, 0, 0), work_hours_kss_ge_7_share: d(0, 0.02, 0.05, 0.1, 0.2) }, daylight: { mean_phase_shift_h: d(-0.8, -0.5, -0.4, -0.3, -0.1), work_hours_kss_ge_7_share: d(0, 0.01, 0.03, 0.06, 0.15) } } },
       },
     ],
   },
 };
 
 describe('cohort ranges for the briefing from results.json', () => {
-  it('gives one row per person, strategy and known metric, with quartiles, shares printed as %', () => {
+  it('gives one row per person, strategy and known metric (no phase shift for the baseline), with quartiles, shares printed as %', () => {
     const c = cohortFromResults(results);
     expect(c?.occupants).toBe(40);
     expect(c?.seed).toBe(7);
-    expect(c?.ranges.map((r) => `${r.strategyId}:${r.label}`)).toEqual(['baseline:Work time with KSS ≥ 7', 'daylight:Phase shift vs baseline (last 7 days; + later)', 'daylight:Work time with KSS ≥ 7']);
+    expect(c?.ranges.map((r) => `${r.strategyId}:${r.label}`)).toEqual(['baseline:Work time with KSS ≥ 7', 'daylight:Phase shift vs baseline, last 7 days (+ later)', 'daylight:Work time with KSS ≥ 7']);
     const kss = c?.ranges[0];
     expect([kss?.p05, kss?.q25, kss?.median, kss?.q75, kss?.p95]).toEqual([0, 2, 5, 10, 20]);
     expect(kss?.unit).toBe('%');

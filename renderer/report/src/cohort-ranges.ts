@@ -13,14 +13,17 @@ interface MetricLabel {
 
 /** Printed names of the cohort's headline metrics, in print order. */
 export const COHORT_METRIC_LABELS: Readonly<Record<string, MetricLabel>> = {
-  mean_phase_shift_h: { label: 'Phase shift vs baseline (last 7 days; + later)', unit: 'h', decimals: 2, scale: 1 },
-  mean_melatonin_suppression_pct: { label: 'Melatonin suppression per night', unit: '%', decimals: 0, scale: 1 },
+  mean_phase_shift_h: { label: 'Phase shift vs baseline, last 7 days (+ later)', unit: 'h', decimals: 2, scale: 1 },
+  mean_melatonin_suppression_pct: { label: 'Melatonin suppression', unit: '%', decimals: 0, scale: 1 },
   work_hours_kss_ge_7_share: { label: 'Work time with KSS ≥ 7', unit: '%', decimals: 0, scale: 100 },
   mean_phase_angle_dlmo_to_sleep_h: { label: 'DLMO to sleep onset', unit: 'h', decimals: 2, scale: 1 },
   mean_sleep_duration_h: { label: 'Main sleep duration', unit: 'h', decimals: 2, scale: 1 },
-  mean_daytime_hours_ge_250_lx: { label: 'Daytime hours with melanopic EDI ≥ 250 lx', unit: 'h', decimals: 1, scale: 1 },
-  mean_pre_sleep_mel_edi_lx: { label: 'Pre-sleep melanopic EDI', unit: 'lx', decimals: 1, scale: 1 },
+  mean_daytime_hours_ge_250_lx: { label: 'Daytime hours at mel. EDI ≥ 250 lx', unit: 'h', decimals: 1, scale: 1 },
+  mean_pre_sleep_mel_edi_lx: { label: 'Pre-sleep mel. EDI (3 h)', unit: 'lx', decimals: 1, scale: 1 },
 };
+
+/** Strategy id of the baseline in results.json. */
+const BASELINE_STRATEGY_ID = 'baseline';
 
 const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
 const num = (v: unknown): number | null => (typeof v === 'number' && Number.isFinite(v) ? v : null);
@@ -44,7 +47,8 @@ export function cohortFromResults(results: unknown): CohortSummary | undefined {
       for (const metric of order) {
         const label = COHORT_METRIC_LABELS[metric];
         const d = byMetric[metric];
-        if (label === undefined || !isRecord(d)) continue;
+        // The baseline's phase shift is 0 by definition.
+        if (label === undefined || !isRecord(d) || (metric === 'mean_phase_shift_h' && strategyId === BASELINE_STRATEGY_ID)) continue;
         const at = (k: string) => {
           const v = num(d[k]);
           return v === null ? null : v * label.scale;

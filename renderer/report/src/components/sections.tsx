@@ -216,10 +216,9 @@ export function CohortSection({ doc, view }: { doc: BriefingDocument; view: Resu
       <p>
         {cohort.occupants} virtual occupants were simulated per person, each under every strategy, with their own intrinsic period, light sensitivity and habitual sleep timing drawn around the persona{cohort.seed === null ? '' : ` (seed ${cohort.seed})`}. The table gives the median, the middle half (25th to 75th percentile, the box in the band) and the middle 90 % (5th to 95th percentile, the line); bands of one person and metric share a scale.
       </p>
-      <table className="data keep">
+      <table className="data breakable">
         <thead>
           <tr>
-            <th>Person</th>
             <th>Strategy</th>
             <th>Metric</th>
             <th className="num">5th pct.</th>
@@ -233,10 +232,16 @@ export function CohortSection({ doc, view }: { doc: BriefingDocument; view: Resu
         <tbody>
           {cohort.ranges.map((r, i) => {
             const s = scale.get(`${r.personaId}\u0000${r.label}`);
-            return (
+            const first = i === 0 || cohort.ranges[i - 1]?.personaId !== r.personaId;
+            const newStrategy = first || cohort.ranges[i - 1]?.strategyId !== r.strategyId;
+            return [
+              first ? (
+                <tr key={`p${i}`}>
+                  <th colSpan={8}>{name(view.personas, r.personaId)}</th>
+                </tr>
+              ) : null,
               <tr key={i}>
-                <td>{name(view.personas, r.personaId)}</td>
-                <td>{name(view.strategies, r.strategyId)}</td>
+                <td>{newStrategy ? name(view.strategies, r.strategyId) : ''}</td>
                 <td>{r.label}</td>
                 <td className="num">{cell(r.p05, r)}</td>
                 <td className="num">{cell(r.q25, r)}</td>
@@ -244,8 +249,8 @@ export function CohortSection({ doc, view }: { doc: BriefingDocument; view: Resu
                 <td className="num">{cell(r.q75, r)}</td>
                 <td className="num">{cell(r.p95, r)}</td>
                 <td>{s === undefined ? null : <CohortBand r={r} lo={s.lo} hi={s.hi} />}</td>
-              </tr>
-            );
+              </tr>,
+            ];
           })}
         </tbody>
       </table>
