@@ -5,6 +5,8 @@ export { RunInputError } from './run-input-error.js';
 export { LIGHT_SOURCES, type LightSource, type EyeSeries } from './eye-series.js';
 export { exposureCsv, summaryCsv, EXPOSURE_STEP_MIN } from './results-csv.js';
 export { RECOMMENDATION_RULE } from './recommend.js';
+export { prepareCohortPersona, runCohortOccupant, type CohortPersonaBase, type CohortPerson } from './cohort-occupant.js';
+export { shiftedSleepSpec, fixedAwakeMinutes } from './cohort-sleep-shift.js';
 export type { WeatherText } from './outdoor-light.js';
 
 import { clearEntrainCache } from './body-clock-run.js';
