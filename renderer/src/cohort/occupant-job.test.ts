@@ -6,7 +6,7 @@ import { populationCohortSpread, zeroCohortSpread } from '../../../model/cohort/
 import { runScenario } from '../../../schedules/run/index.js';
 import { cohortWorkerHandler } from './cohort-in-worker.js';
 import type { CohortWorkerToPage } from './cohort-protocol.js';
-import { occupantScenario, runOccupantJob } from './occupant-job.js';
+import { occupantPerson, OccupantRunner, runOccupantJob } from './occupant-job.js';
 
 function deskScenario(): Scenario {
   const input = structuredClone(DEMO_SCENARIO);
@@ -24,24 +24,36 @@ describe('a virtual occupant', () => {
     const tunable = single.strategies.find((s) => s.id === 'office-tunable-white')!;
     expect(outcome.byStrategy['office-tunable-white']?.phaseShift_h).toBe(tunable.summary.mean_phase_shift_h);
     expect(outcome.byStrategy['office-tunable-white']?.melatoninSuppression_pct).toBe(tunable.summary.mean_melatonin_suppression_pct);
+    expect(outcome.byStrategy['office-tunable-white']?.sleepDuration_h).toBe(tunable.summary.mean_sleep_duration_h);
+    expect(outcome.byStrategy['office-tunable-white']?.phaseAngle_h).toBe(tunable.summary.mean_phase_angle_dlmo_to_sleep_h);
     expect(Object.keys(outcome.byStrategy).sort()).toEqual(['baseline', 'office-tunable-white']);
   }, 120_000);
 
-  it('varies intrinsic period and light sensitivity within the scenario limits, the same for the same seed and index', () => {
+  it('varies intrinsic period, light sensitivity and sleep timing within the scenario limits, the same for the same seed and index', () => {
     const scenario = deskScenario();
     const spread = populationCohortSpread(null);
-    const a = occupantScenario(scenario, { personaId: 'desk-worker', seed: 11, occupantIndex: 2, spread }).personas[0]!;
-    const b = occupantScenario(scenario, { personaId: 'desk-worker', seed: 11, occupantIndex: 2, spread }).personas[0]!;
-    const c = occupantScenario(scenario, { personaId: 'desk-worker', seed: 11, occupantIndex: 3, spread }).personas[0]!;
+    const a = occupantPerson(scenario, { personaId: 'desk-worker', seed: 11, occupantIndex: 2, spread });
+    const b = occupantPerson(scenario, { personaId: 'desk-worker', seed: 11, occupantIndex: 2, spread });
+    const c = occupantPerson(scenario, { personaId: 'desk-worker', seed: 11, occupantIndex: 3, spread });
     expect(a).toEqual(b);
-    expect(a.intrinsicPeriod_h).not.toBe(c.intrinsicPeriod_h);
-    for (const p of [a, c]) {
+    expect(a.person.intrinsicPeriod_h).not.toBe(c.person.intrinsicPeriod_h);
+    expect(a.person.habitualMidSleepShift_h).not.toBe(c.person.habitualMidSleepShift_h);
+    for (const p of [a.person, c.person]) {
       expect(p.intrinsicPeriod_h).toBeGreaterThanOrEqual(23);
       expect(p.intrinsicPeriod_h).toBeLessThanOrEqual(25.5);
       expect(p.lightSensitivity).toBeGreaterThanOrEqual(0.05);
       expect(p.lightSensitivity).toBeLessThanOrEqual(20);
     }
   });
+
+  it('gives the same outcome from a runner that prepared the person before (cached light) as from a fresh one', () => {
+    const scenario = deskScenario();
+    const spread = populationCohortSpread(null);
+    const runner = new OccupantRunner(scenario);
+    runner.run({ personaId: 'desk-worker', seed: 5, occupantIndex: 0, spread });
+    const again = runner.run({ personaId: 'desk-worker', seed: 5, occupantIndex: 1, spread });
+    expect(again).toEqual(runOccupantJob(scenario, { personaId: 'desk-worker', seed: 5, occupantIndex: 1, spread }));
+  }, 120_000);
 
   it('in the worker: a scenario with problems answers each job with a failure naming it', () => {
     const posted: CohortWorkerToPage[] = [];

@@ -1,14 +1,15 @@
-// One virtual occupant of a persona's cohort, run inside a Web Worker: the persona's intrinsic
-// period, light sensitivity and age replaced by the occupant's draw (model/cohort, one seeded
-// stream per occupant, so the result depends only on seed and occupant index — never on which
-// worker ran it), the pipeline run for that persona under the baseline and every strategy, and
-// the cohort metrics returned per strategy. Pure: no DOM, no worker API.
+// One virtual occupant of a persona's cohort, run inside a Web Worker through the pipeline's
+// per-occupant entry (schedules/run/cohort-occupant.ts): the persona's light at the eye under
+// every strategy is prepared once per worker (and per drawn age, as lens transmission differs),
+// then each occupant runs only the body-clock models and metrics with its own intrinsic period,
+// light sensitivity and habitual sleep timing (model/cohort, one seeded stream per occupant, so
+// the result depends only on seed and occupant index — never on which worker ran it). Pure: no
+// DOM, no worker API.
 import type { CohortSpread, PersonaTraits } from '../../../model/cohort/occupant-traits.js';
 import type { OccupantOutcome } from '../../../model/cohort/aggregate-cohort.js';
 import { sampleOccupantTraits } from '../../../model/cohort/sample-occupants.js';
 import type { Scenario } from '../../../schedules/schema/scenario-types.js';
-import { runScenario, type StrategyResult } from '../../../schedules/run/index.js';
-import { clockHoursOfLocal } from '../results/results-adapter.js';
+import { prepareCohortPersona, runCohortOccupant, type CohortPerson, type CohortPersonaBase } from '../../../schedules/run/cohort-occupant.js';
 
 export interface OccupantJob {
   readonly personaId: string;
@@ -17,13 +18,13 @@ export interface OccupantJob {
   readonly spread: CohortSpread;
 }
 
-/** The metrics each occupant reports, keyed as model/cohort's convergence tolerances. */
+/** The metrics each occupant reports (strategy summaries of the results format), keyed as model/cohort's convergence tolerances. */
 export const COHORT_METRICS = [
   { id: 'phaseShift_h', label: 'Body-clock shift vs baseline', unit: 'h', decimals: 2 },
   { id: 'melatoninSuppression_pct', label: 'Melatonin suppression per night', unit: '%', decimals: 1 },
   { id: 'kss7Share_pct', label: 'Work time at KSS ≥ 7', unit: '%', decimals: 1 },
-  { id: 'sleepOnset_h', label: 'Sleep onset (mean local clock, last 7 days)', unit: 'h', decimals: 2 },
-  { id: 'dlmo_h', label: 'DLMO (last day, local clock)', unit: 'h', decimals: 2 },
+  { id: 'phaseAngle_h', label: 'DLMO to sleep onset (sleep timing)', unit: 'h', decimals: 2 },
+  { id: 'sleepDuration_h', label: 'Main sleep', unit: 'h', decimals: 2 },
 ] as const;
 
 export type CohortMetricId = (typeof COHORT_METRICS)[number]['id'];
@@ -40,48 +41,51 @@ export function personaTraitsOf(scenario: Scenario, personaId: string): PersonaT
   return { intrinsicPeriod_h: p.intrinsicPeriod_h, lightSensitivity: p.lightSensitivity, age_y: p.age_y };
 }
 
-/** Mean local clock time of sleep onset over the last `days` days that have one (evening onsets keep their order past midnight). */
-function meanSleepOnset_h(s: StrategyResult, days = 7): number | null {
-  const values = s.days
-    .slice(-days)
-    .map((d) => clockHoursOfLocal(d.sleep_onset_local))
-    .filter((v): v is number => v !== null);
-  return values.length === 0 ? null : values.reduce((a, b) => a + b, 0) / values.length;
-}
-
-function lastDlmo_h(s: StrategyResult): number | null {
-  for (let i = s.days.length - 1; i >= 0; i--) {
-    const h = clockHoursOfLocal(s.days[i]?.dlmo_local ?? null);
-    if (h !== null) return h;
-  }
-  return null;
-}
-
-export function occupantScenario(scenario: Scenario, job: OccupantJob): Scenario {
+/** The occupant's drawn traits, clamped to the scenario's limits. */
+export function occupantPerson(scenario: Scenario, job: OccupantJob): { age_y: number; person: CohortPerson } {
   const traits = sampleOccupantTraits(personaTraitsOf(scenario, job.personaId), job.spread, job.seed, job.occupantIndex);
   return {
-    ...scenario,
-    personas: scenario.personas.map((p) =>
-      p.id === job.personaId
-        ? { ...p, intrinsicPeriod_h: clamp(traits.intrinsicPeriod_h, PERIOD_LIMITS_H), lightSensitivity: clamp(traits.lightSensitivity, SENSITIVITY_LIMITS), age_y: clamp(traits.age_y, AGE_LIMITS_Y) }
-        : p,
-    ),
+    age_y: clamp(traits.age_y, AGE_LIMITS_Y),
+    person: { intrinsicPeriod_h: clamp(traits.intrinsicPeriod_h, PERIOD_LIMITS_H), lightSensitivity: clamp(traits.lightSensitivity, SENSITIVITY_LIMITS), habitualMidSleepShift_h: traits.habitualMidSleepShift_h },
   };
 }
 
-export function runOccupantJob(scenario: Scenario, job: OccupantJob): OccupantOutcome {
-  const out = runScenario({ scenario: occupantScenario(scenario, job), personaIds: [job.personaId] });
-  const persona = out.results.personas.find((p) => p.id === job.personaId);
-  const byStrategy: Record<string, Record<CohortMetricId, number | null>> = {};
-  for (const s of persona?.strategies ?? []) {
-    const m = s.summary;
-    byStrategy[s.id] = {
-      phaseShift_h: m.mean_phase_shift_h,
-      melatoninSuppression_pct: m.mean_melatonin_suppression_pct,
-      kss7Share_pct: m.work_hours_kss_ge_7_share === null ? null : m.work_hours_kss_ge_7_share * 100,
-      sleepOnset_h: meanSleepOnset_h(s),
-      dlmo_h: lastDlmo_h(s),
-    };
+/** Runs occupants of one scenario, keeping each persona's prepared light (a few ages at most). */
+export class OccupantRunner {
+  private readonly prepared = new Map<string, CohortPersonaBase>();
+  private static readonly MAX_PREPARED = 8;
+
+  constructor(private readonly scenario: Scenario) {}
+
+  private preparedFor(personaId: string, age_y: number): CohortPersonaBase {
+    const key = `${personaId}\u0000${age_y}`;
+    let base = this.prepared.get(key);
+    if (base === undefined) {
+      const own = this.scenario.personas.find((p) => p.id === personaId)?.age_y;
+      base = prepareCohortPersona({ scenario: this.scenario }, personaId, own === age_y ? undefined : age_y);
+      if (this.prepared.size >= OccupantRunner.MAX_PREPARED) this.prepared.clear();
+      this.prepared.set(key, base);
+    }
+    return base;
   }
-  return { occupantIndex: job.occupantIndex, byStrategy };
+
+  run(job: OccupantJob): OccupantOutcome {
+    const { age_y, person } = occupantPerson(this.scenario, job);
+    const summaries = runCohortOccupant(this.preparedFor(job.personaId, age_y), person);
+    const byStrategy: Record<string, Record<CohortMetricId, number | null>> = {};
+    for (const [id, m] of Object.entries(summaries)) {
+      byStrategy[id] = {
+        phaseShift_h: m.mean_phase_shift_h,
+        melatoninSuppression_pct: m.mean_melatonin_suppression_pct,
+        kss7Share_pct: m.work_hours_kss_ge_7_share === null ? null : m.work_hours_kss_ge_7_share * 100,
+        phaseAngle_h: m.mean_phase_angle_dlmo_to_sleep_h,
+        sleepDuration_h: m.mean_sleep_duration_h,
+      };
+    }
+    return { occupantIndex: job.occupantIndex, byStrategy };
+  }
+}
+
+export function runOccupantJob(scenario: Scenario, job: OccupantJob): OccupantOutcome {
+  return new OccupantRunner(scenario).run(job);
 }

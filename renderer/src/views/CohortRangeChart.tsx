@@ -18,8 +18,10 @@ export function CohortRangeChart({ rows, title }: { rows: readonly RangeRow[]; t
   if (usable.length === 0) return null;
   const lo = Math.min(...usable.map((r) => r.p05 as number));
   const hi = Math.max(...usable.map((r) => r.p95 as number));
-  const span = hi - lo > 0 ? hi - lo : 1;
-  const half = span * 0.006;
+  // Padding around the widest range; a cohort without spread still gets a readable axis.
+  const pad = hi - lo > 0 ? (hi - lo) * 0.05 : Math.max(0.5, Math.abs(hi) * 0.02);
+  const domain: [number, number] = [lo - pad, hi + pad];
+  const half = (domain[1] - domain[0]) * 0.004;
   const data: Datum[] = usable.map((r) => ({
     name: r.strategyName,
     outer: [r.p05 as number, r.p95 as number],
@@ -35,13 +37,14 @@ export function CohortRangeChart({ rows, title }: { rows: readonly RangeRow[]; t
         {title} ({unit}) — <span className="legend-outer">5–95 %</span>, <span className="legend-inner">interquartile range</span>, median tick
       </figcaption>
       <ResponsiveContainer width="100%" height={Math.max(120, 44 * data.length + 50)}>
-        <BarChart data={data} layout="vertical" margin={{ top: 8, right: 24, bottom: 8, left: 8 }} barGap={0}>
+        <BarChart data={data} layout="vertical" margin={{ top: 8, right: 24, bottom: 8, left: 72 }} barGap={0}>
           <CartesianGrid stroke="#e3e6ea" horizontal={false} />
-          <XAxis type="number" domain={[lo - span * 0.05, hi + span * 0.05]} tickFormatter={(v: number) => formatNumber(v, decimals)} />
-          <YAxis yAxisId="outer" type="category" dataKey="name" width={230} />
+          <XAxis type="number" domain={domain} tickCount={5} tickFormatter={(v: number) => formatNumber(v, decimals)} />
+          <YAxis yAxisId="outer" type="category" dataKey="name" width={190} tick={{ fontSize: 12 }} tickFormatter={(name: string) => (name.length > 24 ? `${name.slice(0, 23)}…` : name)} />
           <YAxis yAxisId="inner" type="category" dataKey="name" hide />
           <YAxis yAxisId="tick" type="category" dataKey="name" hide />
           <Tooltip
+            cursor={{ fill: 'rgba(0, 0, 0, 0.04)' }}
             content={({ active, payload }) => {
               const d = payload?.[0]?.payload as Datum | undefined;
               if (active !== true || d === undefined) return null;
@@ -63,7 +66,7 @@ export function CohortRangeChart({ rows, title }: { rows: readonly RangeRow[]; t
           />
           <Bar yAxisId="outer" dataKey="outer" fill={OKABE_ITO.skyBlue} fillOpacity={0.45} barSize={22} isAnimationActive={false} />
           <Bar yAxisId="inner" dataKey="inner" fill={OKABE_ITO.blue} fillOpacity={0.8} barSize={22} isAnimationActive={false} />
-          <Bar yAxisId="tick" dataKey="tick" fill={OKABE_ITO.black} barSize={30} isAnimationActive={false} />
+          <Bar yAxisId="tick" dataKey="tick" fill={OKABE_ITO.black} barSize={30} minPointSize={2} isAnimationActive={false} />
         </BarChart>
       </ResponsiveContainer>
     </figure>

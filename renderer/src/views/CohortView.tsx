@@ -14,7 +14,7 @@ import { convergenceOptionsFor } from '../cohort/cohort-pool.js';
 import { formatNumber } from '../charts/comparison-data.js';
 import { metricKey } from '../../../model/cohort/convergence.js';
 
-const READOUT_METRICS = ['phaseShift_h', 'melatoninSuppression_pct', 'kss7Share_pct', 'sleepOnset_h'] as const;
+const READOUT_METRICS = ['phaseShift_h', 'melatoninSuppression_pct', 'kss7Share_pct', 'phaseAngle_h'] as const;
 const metricInfo = (id: string) => COHORT_METRICS.find((m) => m.id === id);
 
 function strategiesOf(view: ResultsView | null, scenario: ScenarioInput, personaId: string) {
@@ -112,7 +112,7 @@ export function CohortView({ scenario }: { scenario: ScenarioInput }) {
       <header className="panel-header">
         <h2 id="cohort-title">Cohort</h2>
         <p className="panel-lead">
-          Virtual occupants around each person: intrinsic period and light sensitivity drawn from published between-person spreads (seeded, the same for any number of workers), each run through the whole simulation under every strategy. Results are ranges, not one number.
+          Virtual occupants around each person: intrinsic period, light sensitivity and habitual sleep timing drawn from published between-person spreads (seeded, the same for any number of workers), each run through the whole simulation under every strategy. Results are ranges, not one number.
         </p>
       </header>
       <Cautions />
@@ -225,7 +225,7 @@ export function CohortView({ scenario }: { scenario: ScenarioInput }) {
                   </tbody>
                 </table>
                 <div className="cohort-charts">
-                  {COHORT_METRICS.filter((m) => m.id !== 'dlmo_h').map((m) => (
+                  {COHORT_METRICS.map((m) => (
                     <CohortRangeChart key={m.id} title={m.label} rows={rows.filter((r) => r.metricId === m.id)} />
                   ))}
                 </div>
