@@ -68,12 +68,22 @@ export async function runCohorts(input: RunInput, size: number, seed: number, se
       preparationKey: `${runId}/${p.id}`,
     }));
     const onProgress = settings.onProgress;
+    // Convergence readout for the progress line: the latest checkpoint and whether it settled.
+    let readout = '';
     const run = await runCohortPool({
       jobs,
       jobModule: new URL('./cohort-job.js', import.meta.url),
       ...(settings.workers !== undefined ? { workers: settings.workers } : {}),
       ...(settings.stopRule !== undefined ? { convergence: { ...settings.stopRule, stopWhenConverged: true } } : {}),
-      ...(onProgress !== undefined ? { onProgress: (pr) => onProgress(`${p.name}: ${pr.completed}/${pr.total} occupants`) } : {}),
+      ...(onProgress !== undefined
+        ? {
+            onProgress: (pr) => {
+              const last = pr.checkpoints[pr.checkpoints.length - 1];
+              if (last !== undefined) readout = ` · checkpoint ${last.occupants}: ${last.converged ? 'medians and IQRs settled' : 'still moving'}`;
+              onProgress(`${p.name}: ${pr.completed}/${pr.total} occupants${readout}`);
+            },
+          }
+        : {}),
     });
     personas.push({ id: p.id, summary: run.summary, occupants_run: run.outcomes.length, converged_at: run.convergedAt });
   }
