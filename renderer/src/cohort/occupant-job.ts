@@ -9,7 +9,7 @@ import type { CohortSpread, PersonaTraits } from '../../../model/cohort/occupant
 import type { OccupantOutcome } from '../../../model/cohort/aggregate-cohort.js';
 import { sampleOccupantTraits } from '../../../model/cohort/sample-occupants.js';
 import type { Scenario } from '../../../schedules/schema/scenario-types.js';
-import { prepareCohortPersona, runCohortOccupant, type CohortPerson, type CohortPersonaBase } from '../../../schedules/run/cohort-occupant.js';
+import { prepareCohortPersona, runCohortOccupant, type CohortPerson, type CohortPersonaBase } from '../../../schedules/run/index.js';
 
 export interface OccupantJob {
   readonly personaId: string;
