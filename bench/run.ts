@@ -1,5 +1,5 @@
 /**
- * `npm run bench [-- --json] [-- --only <name>]`: runs every benchmark case in bench/cases/ and
+ * `npm run -s bench -- [--json] [--only <name>]` (`-s` keeps npm's banner off stdout): runs every benchmark case in bench/cases/ and
  * prints one JSON document merging their keys (with --json) or a readable list.
  * A case module exports `bench(): Promise<Record<string, unknown>>` and reports medians over
  * repeated runs. Timing goals live here, never in timed tests.

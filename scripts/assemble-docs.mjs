@@ -10,9 +10,9 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
 const docs = join(fileURLToPath(import.meta.url), '..', '..', 'docs');
-// Reading order: light first (photometry → sun and daylight → at the eye), then the body,
+// Reading order: a summary first, then light (photometry → sun and daylight → at the eye), then the body,
 // then scenarios, the run pipeline, cohorts and anything added later in name order.
-const ORDER = ['photometry', 'sun-and-daylight', 'sun', 'light-at-eye', 'circadian', 'scenarios', 'pipeline', 'cohort', 'briefing'];
+const ORDER = ['summary', 'photometry', 'sun-and-daylight', 'sun', 'light-at-eye', 'circadian', 'scenarios', 'pipeline', 'cohort', 'briefing'];
 
 const TITLES = {
   methods: ['Methods', 'Equations, parameters, units and sources of every model in Zeitlight, and how each open question in the literature was settled.'],
