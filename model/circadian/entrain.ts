@@ -1,8 +1,8 @@
 /**
  * Entrained initial state: repeat day 0's light (and sleep) for as many days as needed until the
  * daily phase marker moves by less than ENTRAIN_MARKER_TOL_H and the amplitude at midnight by less
- * than ENTRAIN_AMPLITUDE_TOL (and the sleep pressure by less than ENTRAIN_PRESSURE_TOL_NM), at most ENTRAIN_MAX_DAYS days (convergence rule as recommended in
- * the models reference, §10: 1 min and 1e-4, cap ≈ 100 days). The returned state is rebased to
+ * than ENTRAIN_AMPLITUDE_TOL (and the sleep pressure by less than ENTRAIN_PRESSURE_TOL_NM), at most ENTRAIN_MAX_DAYS days (common
+ * convergence rule: 1 min and 1e-4, cap ≈ 100 days). The returned state is rebased to
  * t = 0 (local midnight of day 0).
  */
 import type { LightSeries } from './light-series.js';

@@ -2,7 +2,7 @@
  * Second pass of the simulation: plasma melatonin (St Hilaire et al. 2007 J Pineal Res; see
  * melatonin-sthilaire.ts) driven by the synthesis switch times found on the pacemaker trajectory
  * and by its own Process L (MELATONIN_PROCESS_L). Melatonin does not feed back on the pacemaker in this model, so it is
- * integrated after the pacemaker pass, as the models reference (§4, "Implementation") suggests.
+ * integrated after the pacemaker pass.
  *
  * Method: the time axis is split at light breakpoints, sleep/wake and synthesis switches; in
  * each piece the light is constant (or smooth), so n of Process L relaxes exponentially and the

@@ -18,12 +18,12 @@ function darkPeriod(id: (typeof PACEMAKER_IDS)[number], tau_h?: number): number 
 
 describe('free-running period in darkness', () => {
   // Kronauer family: the 0.99729 / 0.99669 factors make the period equal τx (24.2004 h for
-  // τx = 24.2, models reference §2.2, computed with LSODA).
+  // τx = 24.2, computed independently with SciPy LSODA as a regression value).
   it.each(['jfk99-x7', 'fjk99-cubic', 'fjk99-cubic-sf14'] as const)('%s runs at τx = 24.2 h', (id) => {
     expect(darkPeriod(id)).toBeCloseTo(24.2004, 2);
   });
 
-  it('Hannay 2019 runs at 24.18 h although its natural frequency is 2π/23.84 h (reference §9: 24.177 h)', () => {
+  it('Hannay 2019 runs at 24.18 h although its natural frequency is 2π/23.84 h (regression value 24.177 h)', () => {
     expect(Math.abs(darkPeriod('hfb19-sp') - 24.177)).toBeLessThan(0.01);
   });
 
@@ -33,7 +33,7 @@ describe('free-running period in darkness', () => {
 });
 
 describe('entrained phase', () => {
-  // Regression values of the models reference §11.2, computed independently with SciPy LSODA
+  // Regression values computed independently with SciPy LSODA
   // from the same equations (wake 07:00–23:00, I = 0 asleep): x-minimum clock times.
   const cases: [string, number, string][] = [
     ['jfk99-x7', 150, '03:26'],

@@ -13,7 +13,7 @@
  * awake: the highest solution, with Postnova's wake effort W = max(0, V_WE − ν_mv·Q_v − D_m)
  * (so wake can be held against high pressure); asleep: the lowest solution. Q_m(D_v) is
  * tabulated once for both states. This keeps the published KSS coefficients applicable (they
- * were fitted to this H and C; the reference warns against feeding H from another model).
+ * were fitted to this H and C; feeding H from another model would void the fit).
  * X, Y are the x⁷ oscillator's (x, xc): used directly for jfk99-x7 and carried over by time since
  * CBTmin for the other pacemakers (limit-cycle.ts).
  */

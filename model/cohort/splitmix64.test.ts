@@ -3,7 +3,7 @@ import { mix64, SplitMix64 } from './splitmix64.js';
 
 describe('SplitMix64', () => {
   it('reproduces the published first outputs for seed 0', () => {
-    // First outputs of the reference splitmix64.c (Vigna) for state 0, as pinned by several
+    // First outputs of Vigna's original splitmix64.c for state 0, as pinned by several
     // independent public test suites.
     const rng = new SplitMix64(0n);
     expect([rng.nextUint64(), rng.nextUint64(), rng.nextUint64(), rng.nextUint64()]).toEqual([

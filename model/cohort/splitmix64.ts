@@ -3,7 +3,7 @@
  * generators", OOPSLA 2014 (doi:10.1145/2660193.2660195). State advances by the odd
  * "golden gamma" 0x9E3779B97F4A7C15; each output is the state passed through the 64-bit
  * finaliser (shift-xor-multiply by 0xBF58476D1CE4E5B9 and 0x94D049BB133111EB; shifts 30, 27, 31),
- * the constants of the reference splitmix64.c by S. Vigna that the xoshiro authors recommend for
+ * the constants of the original splitmix64.c by S. Vigna that the xoshiro authors recommend for
  * seeding. Here it only derives seeds, so the BigInt arithmetic is off the hot path.
  */
 

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { Xoshiro128StarStar } from './xoshiro128starstar.js';
 
 describe('xoshiro128**', () => {
-  it('reproduces the reference implementation (version 1.1) output for state [1, 2, 3, 4]', () => {
+  it('reproduces the original C implementation (version 1.1) output for state [1, 2, 3, 4]', () => {
     // Known-answer vector of the authors' xoshiro128starstar.c 1.1 (scrambler on s[1]), as pinned
     // in the test suite of the Rust crate rand_xoshiro and in several independent public ports.
     // (Version 1.0 scrambled s[0] and starts 5760, 40320, …; the authors call that a mistake.)

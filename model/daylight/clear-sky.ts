@@ -1,8 +1,7 @@
 /**
  * Clear-sky irradiance, Ineichen & Perez (2002), "A new airmass independent formulation for the
  * Linke turbidity coefficient", Solar Energy 73(3):151–157, in the form of pvlib-python's
- * `clearsky.ineichen` (without the optional "Perez enhancement"), as written out in the
- * light-at-eye reference §2.4. Inputs: apparent zenith θz (deg), absolute air mass m_a, Linke
+ * `clearsky.ineichen` (without the optional "Perez enhancement"). Inputs: apparent zenith θz (deg), absolute air mass m_a, Linke
  * turbidity T_L, site altitude h (m), extraterrestrial normal irradiance I0 (W/m²).
  *   fh1 = exp(−h/8000), fh2 = exp(−h/1250), cg1 = 5.09e−5 h + 0.868, cg2 = 3.92e−5 h + 0.0387
  *   GHI = cg1·I0·cos θz·exp(−cg2·m_a·(fh1 + fh2·(T_L − 1)))

@@ -1,7 +1,7 @@
 /**
  * Daylight per time step from a parsed EPW file. EPW values are hourly means (hour-ending, local
- * standard time). Following the light-at-eye reference §8.1 ("interpolate clear-sky ratios, not
- * raw W/m² across sunrise"), each hour gets ratios k = (file value)/(clear-sky mean over the same
+ * standard time). Following common practice (interpolate clear-sky ratios, not
+ * raw W/m² across sunrise), each hour gets ratios k = (file value)/(clear-sky mean over the same
  * hour) for direct normal and diffuse horizontal, in lux and in W/m²; k is interpolated linearly
  * between hour midpoints and multiplied by the clear-sky value at each step. Sunrise and sunset
  * thus follow the sun, not the hour grid. Illuminance comes from the file's columns when present,

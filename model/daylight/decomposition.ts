@@ -6,7 +6,7 @@
  *     k_d = 1 − 0.09 k_t (k_t ≤ 0.22); 0.9511 − 0.1604k_t + 4.388k_t² − 16.638k_t³ + 12.336k_t⁴
  *     (0.22 < k_t ≤ 0.8); 0.165 (k_t > 0.8). Direct normal is zeroed above 87° zenith (pvlib default).
  * - Kasten & Czeplak (1980), Solar Energy 24:177–189: GHI = GHI_clear·(1 − 0.75 (N/8)^3.4) for N
- *   oktas of cloud (from memory, as in the light-at-eye reference §2.5).
+ *   oktas of cloud (from memory).
  */
 import type { IrradianceComponents } from './clear-sky.js';
 

@@ -1,8 +1,7 @@
 /**
  * Extraterrestrial normal irradiance and relative air mass.
  * I0 = Isc·(1.00011 + 0.034221 cos Γ + 0.00128 sin Γ + 0.000719 cos 2Γ + 0.000077 sin 2Γ),
- * Γ = 2π(doy − 1)/365 (Spencer 1971 series, as used by the open-source sky generator cited in
- * the light-at-eye reference §2.2), Isc = 1367 W/m² (same source).
+ * Γ = 2π(doy − 1)/365 (Spencer 1971 series, as used by open-source sky generators), Isc = 1367 W/m² (same source).
  */
 export const SOLAR_CONSTANT_W_M2 = 1367;
 

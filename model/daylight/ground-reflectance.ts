@@ -1,9 +1,9 @@
 /**
  * Ground reflectance (albedo) for the ground-reflected part of eye illuminance. Surface values
  * from pvlib-python `albedo.SURFACE_ALBEDOS` (citing the PVsyst help, Wikipedia "Albedo" and
- * Payne 1972), as listed in the light-at-eye reference §3.7. Snow on the ground (EPW snow depth
+ * Payne 1972). Snow on the ground (EPW snow depth
  * > 0) switches to snow: 0.75 (fresh, ≤ 3 days since snowfall) or 0.65 (older) — the split by
- * days since snowfall is a heuristic from memory (reference §3.7).
+ * days since snowfall is a heuristic from memory.
  */
 export const SURFACE_REFLECTANCE = {
   urban: 0.18,

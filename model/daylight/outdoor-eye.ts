@@ -1,5 +1,5 @@
 /**
- * Illuminance at the eye outdoors, unobstructed (light-at-eye reference §3.1): sun, sky and
+ * Illuminance at the eye outdoors, unobstructed: sun, sky and
  * ground on the plane facing the gaze, kept apart.
  *  - sun:    E_bn·max(0, cos θi), cos θi = cos θz cos β + sin θz sin β cos(φs − γ)
  *  - ground: ρ·E_gh·(1 − cos β)/2 (diffusely reflecting horizontal ground; pvlib get_ground_diffuse)
@@ -8,7 +8,7 @@
  * "All directions": the mean over gaze azimuths, in closed form: the mean of max(0, A + B cos x)
  * over x is (A·x0 + B·sin x0)/π with cos x0 = −A/B (A = cos θz cos β, B = sin θz sin β ≥ 0), or
  * A if A ≥ B, or 0 if A ≤ −B. For a vertical plane this is sin θz/π.
- * Near and below the horizon (θz > 87°) the Perez sky falls back to isotropic (reference §8.2).
+ * Near and below the horizon (θz > 87°) the Perez sky falls back to isotropic.
  */
 import type { DaylightSeries } from './daylight-series.js';
 import { DEFAULT_GROUND_REFLECTANCE, groundReflectanceWithSnow } from './ground-reflectance.js';

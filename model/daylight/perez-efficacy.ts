@@ -1,8 +1,7 @@
 /**
  * Luminous efficacy of daylight, Perez, Ineichen, Seals, Michalsky & Stewart (1990), "Modeling
  * daylight availability and irradiance components from direct and global irradiance", Solar
- * Energy 44(5):271–289, Table 4 coefficients (as tabulated in the light-at-eye reference §2.3,
- * verified there against an open-source sky generator that reproduces the paper's table):
+ * Energy 44(5):271–289, Table 4 coefficients:
  *   diffuse  K_d = a + b·W + c·cos Z + d·ln Δ
  *   direct   K_b = max(0, a + b·W + c·exp(5.73 Z − 5) + d·Δ)
  *   global   K_g = a + b·W + c·cos Z + d·ln Δ
@@ -53,7 +52,7 @@ export interface EfficacyInput {
   readonly extraterrestrial_W_m2: number;
 }
 
-/** Highest zenith used for the efficacy and index formulas (§8 of the reference: low sun is unstable). */
+/** Highest zenith used for the efficacy and index formulas (low sun is unstable). */
 export const PEREZ_MAX_ZENITH_DEG = 87;
 
 /** Direct normal, diffuse and global horizontal illuminance from irradiance (Perez 1990). */

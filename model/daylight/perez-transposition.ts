@@ -1,8 +1,7 @@
 /**
  * Perez et al. (1990) anisotropic sky on a tilted plane, coefficient set "allsitescomposite1990"
- * (as tabulated in the light-at-eye reference §3.1, verified there against pvlib-python's
- * `irradiance.perez`). Applied to illuminance with the irradiance coefficients (reference §3.1:
- * the sky's efficacy is assumed equal on every plane).
+ * (as in pvlib-python's `irradiance.perez`). Applied to illuminance with the irradiance
+ * coefficients (the sky's efficacy is assumed equal on every plane).
  *   F1 = max(0, f11 + f12·Δ + f13·Z),  F2 = f21 + f22·Δ + f23·Z   (Z = solar zenith, rad)
  *   E_s = E_dh·[(1 − F1)(1 + cos β)/2 + F1·a/b + F2·sin β],  a = max(0, cos θi), b = max(cos 85°, cos θz)
  */

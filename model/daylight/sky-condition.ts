@@ -1,10 +1,10 @@
 /**
  * Daylight without a weather file: each day is 'clear', 'intermediate' or 'overcast'.
  *  - clear: Ineichen–Perez clear sky (Linke turbidity 3 by default — rural/suburban mid-latitude,
- *    light-at-eye reference §2.4, from memory);
+ *    from memory);
  *  - intermediate: 5 oktas of cloud, overcast: 8 oktas, dimming clear-sky GHI by Kasten & Czeplak
- *    (1980) — factors 0.85 and 0.25; overcast 0.25 matches the reference's "20–30 % of clear-sky
- *    GHI" order of magnitude;
+ *    (1980) — factors 0.85 and 0.25; overcast 0.25 matches the usual "20–30 % of clear-sky
+ *    GHI" order of magnitude (from memory);
  *  - intermediate GHI is split into direct and diffuse by Erbs et al. (1982); overcast keeps no
  *    direct sun (sun hidden), all GHI diffuse.
  * The cloud amounts per class are our own choice (documented in docs/methods/sun-and-daylight.md).

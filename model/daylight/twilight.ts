@@ -2,8 +2,7 @@
  * Low-sun and twilight floor for diffuse horizontal illuminance. The clear-sky and weather-file
  * models give (nearly) no light once the sun touches the horizon, while real skies give about
  * 400 lx at sunrise/sunset and about 3.4 lx at the end of civil twilight (sun −6°) (typical
- * values listed in the light-at-eye reference §7, from web lux tables derived from Wikipedia
- * "Lux"). We interpolate log-linearly between them for −6° < e ≤ 0°, hold 400 lx as a floor for
+ * values of web lux tables derived from Wikipedia "Lux"). We interpolate log-linearly between them for −6° < e ≤ 0°, hold 400 lx as a floor for
  * 0° < e < 3°, and scale by the cloud factor of the hour. The shape is our own (common practice).
  */
 export const TWILIGHT_HORIZON_LX = 400;

@@ -1,15 +1,15 @@
 /**
  * Blinds and shades of a window: states open / lowered / closed. A lowered or closed shade is a
- * diffuser (EnergyPlus shade model, light-at-eye.md §4 [verified there]): no direct sun and no
+ * diffuser (EnergyPlus shade model): no direct sun and no
  * view; the window becomes a uniform luminance τ_shade·E_transmitted/π. Default diffuse
- * transmittances: lowered 0.25 (the "simple dynamic shading" convention of annual daylight tools,
- * light-at-eye.md §4 [verified there]), closed 0.02 (blackout, assumed).
+ * transmittances: lowered 0.25 (the "simple dynamic shading" convention of annual daylight tools),
+ * closed 0.02 (blackout, assumed).
  *
  * Control:
  *  - manual: one state all the time;
  *  - schedule: a state per minute of the day;
- *  - sun-on-work-area: after Reinhart (2004, Solar Energy 77(1):15–28; rule details from memory,
- *    light-at-eye.md §4): lower when direct sun on the work area exceeds `lowerAbove_W_m2`
+ *  - sun-on-work-area: after Reinhart (2004, Solar Energy 77(1):15–28; rule details from memory):
+ *    lower when direct sun on the work area exceeds `lowerAbove_W_m2`
  *    (default 50 W/m²); raise again either once a day on the occupant's first arrival
  *    (`raise: 'on-arrival'`, Reinhart's active user) or when the direct sun on the work area has
  *    stayed below `raiseBelow_W_m2` (default 25 W/m², our hysteresis choice) for `raiseAfter_min`

@@ -1,8 +1,6 @@
 /**
  * CIE standard general sky: relative sky luminance of the 15 sky types of ISO 15469:2004 /
- * CIE S 011/E:2003 (parameters of Darula & Kittler 2002, as gathered in the project reference
- * "light-at-eye.md" §3.2; gradation groups and the first indicatrix groups verified there, the
- * full 15-type table partly from memory of that reference's compiler).
+ * CIE S 011/E:2003 (parameters of Darula & Kittler 2002; the full 15-type table partly from memory).
  *
  *   gradation   φ(Z) = 1 + a·exp(b / cos Z)            (φ(90°) = 1)
  *   indicatrix  f(χ) = 1 + c·[exp(d·χ) − exp(d·π/2)] + e·cos²χ
@@ -19,7 +17,7 @@ export interface CieSkyParameters {
   readonly e: number;
 }
 
-/** Sky types 1…15 (index 0 is type 1). ISO 15469:2004 Table 1 via light-at-eye.md §3.2. */
+/** Sky types 1…15 (index 0 is type 1). ISO 15469:2004 Table 1. */
 export const CIE_SKY_TYPES: readonly CieSkyParameters[] = [
   { a: 4.0, b: -0.7, c: 0, d: -1.0, e: 0.0 },
   { a: 4.0, b: -0.7, c: 2, d: -1.5, e: 0.15 },

@@ -17,7 +17,7 @@ const dark = (n: number) => constantConditions(n, { zenith_deg: 120, azimuth_deg
 const warm = ledLikeSpectrum(0.15, 610);
 const cool = ledLikeSpectrum(1.2, 560);
 
-describe('screens (E = ∫ L cos θ dω, light-at-eye.md §5.3)', () => {
+describe('screens (E = ∫ L cos θ dω)', () => {
   it.each([
     [0.53, 0.3, 0.6],
     [0.07, 0.15, 0.3],
@@ -27,7 +27,7 @@ describe('screens (E = ∫ L cos θ dω, light-at-eye.md §5.3)', () => {
     expect(Math.abs(screenEyeIlluminance_lx(200, w, h, d) / expected - 1)).toBeLessThan(1e-4);
   });
 
-  it('night mode on the library display model lowers the melanopic EDI per lux and the luminance (light-at-eye.md §5.3: DER falls more than luminance)', () => {
+  it('night mode on the library display model lowers the melanopic EDI per lux and the luminance (Xu et al. 2023: DER falls more than luminance)', () => {
     const spectra = displaySpectra(defaultDisplayModel());
     const scene: RoomScene = {
       ...skyOnlyScene({ windows: [] }),

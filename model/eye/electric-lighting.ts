@@ -1,13 +1,13 @@
 /**
- * Electric lighting at the eye (light-at-eye.md §5.1–5.2).
+ * Electric lighting at the eye.
  *
  * Eye illuminance of a luminaire group at full output is given directly (lx on the vertical eye
  * plane) or as a horizontal desk illuminance times an eye/desk ratio. The default ratio 0.5 is the
  * uniform-ceiling result (vertical plane sees half the cosine-weighted hemisphere of a uniformly
  * luminous ceiling: πL/2 vs πL), and lies in the 0.3–0.6 range quoted as common practice for
- * ceiling-recessed office luminaires (light-at-eye.md §5.1, from memory).
+ * ceiling-recessed office luminaires (from memory).
  *
- * Output is proportional to the scheduled level (LED output ∝ drive level, light-at-eye.md §5.2,
+ * Output is proportional to the scheduled level (LED output ∝ drive level,
  * from memory). Tunable white mixes a warm and a cool channel; the cool channel's share f of
  * photopic lux is the one the source library's tunable-white mix finds for the scheduled CCT
  * (model/sources/tunable-white.ts: tristimulus values add, Ohno 2014 CCT), and every α-opic EDI

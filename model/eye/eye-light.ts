@@ -27,7 +27,7 @@ import { TREGENZA_PATCH_COUNT } from './tregenza-patches.js';
 import { nonZeroPatches, rayPassesAperture } from './window-coefficients.js';
 import { directionFromAltAz_deg, type Vec3 } from './vector3.js';
 
-/** Daylight efficacy used to turn E_bn into W/m² when no irradiance is given (lm/W; light-at-eye.md §2.3 quick fallback, from memory). */
+/** Daylight efficacy used to turn E_bn into W/m² when no irradiance is given (lm/W; a quick fallback, from memory). */
 export const FALLBACK_BEAM_EFFICACY_LM_W = 100;
 const DEG = Math.PI / 180;
 

@@ -11,7 +11,7 @@
  *   R_s = ((cosθ − n cosθt)/(cosθ + n cosθt))²,  R_p = ((cosθt − n cosθ)/(cosθt + n cosθ))²
  *   t(θ) = [1 − (R_s + R_p)/2]^(2·panes),   τ(θ)/τ(0) = t(θ)/t(0)
  * (Fresnel equations: Born & Wolf, Principles of Optics §1.5). This replaces the ASHRAE
- * incidence-angle modifier that light-at-eye.md §3.5 gives from memory.
+ * incidence-angle modifier, which we had only from memory.
  */
 export const GLASS_REFRACTIVE_INDEX = 1.526;
 

@@ -14,12 +14,12 @@ export interface RoomSpec {
   readonly width_m: number;
   readonly depth_m: number;
   readonly height_m: number;
-  /** Diffuse reflectances (0–1). Typical: ceiling 0.7–0.85, walls 0.5–0.7, floor 0.2–0.4 (light-at-eye.md §3.6, from memory). */
+  /** Diffuse reflectances (0–1). Typical: ceiling 0.7–0.85, walls 0.5–0.7, floor 0.2–0.4 (from memory). */
   readonly reflectance: { readonly ceiling: number; readonly walls: number; readonly floor: number };
 }
 
 export interface GroundSpec {
-  /** Ground reflectance per month Jan…Dec without snow; default 0.2 (grass, pvlib SURFACE_ALBEDOS via light-at-eye.md §3.7). */
+  /** Ground reflectance per month Jan…Dec without snow; default 0.2 (grass, pvlib SURFACE_ALBEDOS). */
   readonly monthlyReflectance?: readonly number[];
   /** Reflectance while snow lies on the ground; default 0.65 ("snow", same source). */
   readonly snowReflectance?: number;
@@ -38,7 +38,7 @@ export interface RoomWindowSpec extends WindowSpec {
 
 export interface RoomScene {
   readonly room: RoomSpec;
-  /** Eye height above the floor (m); default 1.2 (seated, light-at-eye.md §6.1). */
+  /** Eye height above the floor (m); default 1.2 (seated, common practice). */
   readonly eyeHeight_m?: number;
   /** Work-plane height (m); default 0.75 (common practice). */
   readonly deskHeight_m?: number;
@@ -61,7 +61,7 @@ export interface OutdoorConditions {
   /** Direct normal and diffuse horizontal illuminance (lx). */
   readonly directNormal_lx: Float64Array;
   readonly diffuseHorizontal_lx: Float64Array;
-  /** Direct normal irradiance (W/m²) for the blinds rule; if absent, E_bn / 100 lm/W (light-at-eye.md §2.3 quick fallback, from memory). */
+  /** Direct normal irradiance (W/m²) for the blinds rule; if absent, E_bn / 100 lm/W (a quick fallback, from memory). */
   readonly directNormal_W_m2?: Float64Array;
   /** Daylight CCT (K) for the CIE D-series spectrum of sky, ground and reflected light; default 6504 K (D65). */
   readonly daylightCct_K?: Float64Array;

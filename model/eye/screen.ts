@@ -1,5 +1,5 @@
 /**
- * Screens at the eye (light-at-eye.md §5.3). A display of mean luminance L = APL × L_white is a
+ * Screens at the eye. A display of mean luminance L = APL × L_white is a
  * uniformly luminous rectangle; the eye illuminance is E = ∫ L cos θ_eye dω, evaluated with the
  * exact element solid angles of rectangle-view.ts (the small-screen form L·Ω·cos θ is its limit).
  * The eye is on the screen's central normal at the viewing distance; the gaze may be tilted away

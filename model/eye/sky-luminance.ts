@@ -1,7 +1,7 @@
 /**
  * Absolute sky luminance per Tregenza patch for one instant: the CIE general sky shape
  * (cie-general-sky.ts) scaled so that the sky integrates to the diffuse horizontal illuminance
- * (light-at-eye.md §3.2, "absolute calibration"):
+ * (absolute calibration):
  *   L_z = E_dh / Σ_p (L_p/L_z) · ∫_p cos Z dω
  * The result is luminance per lux of E_dh (cd·m⁻²·lx⁻¹), so one vector serves every window
  * and every E_dh. The gradation term of each patch depends only on the sky type and is cached.

@@ -1,12 +1,11 @@
 /**
  * Choice of the CIE general sky type for an instant when the weather source gives none.
  *
- * Perez sky clearness (Perez et al. 1990, Solar Energy 44(5):271–289, as in light-at-eye.md §2.3):
+ * Perez sky clearness (Perez et al. 1990, Solar Energy 44(5):271–289):
  *   ε = ((E_dh + E_bn)/E_dh + κ·Z³) / (1 + κ·Z³),   κ = 1.041, Z = solar zenith in radians.
  * Perez defines ε on irradiances; here it is evaluated on illuminances when no irradiance is given
- * (an approximation: beam and diffuse efficacies differ by ~10 %, light-at-eye.md §2.3).
- * Mapping ε → CIE type: the heuristic of light-at-eye.md §3.2 option 3, marked there from memory
- * and unverified; we take one type per bin: ε < 1.065 → 1 (overcast), < 1.5 → 4, < 2.8 → 7,
+ * (an approximation: beam and diffuse efficacies differ by ~10 %).
+ * Mapping ε → CIE type: a heuristic from memory, unverified; we take one type per bin: ε < 1.065 → 1 (overcast), < 1.5 → 4, < 2.8 → 7,
  * < 4.5 → 11, otherwise 12 (CIE standard clear sky).
  */
 const KAPPA = 1.041;

@@ -1,5 +1,5 @@
 /**
- * Daylight coefficients of one window, computed once from geometry (light-at-eye.md §3.3, the
+ * Daylight coefficients of one window, computed once from geometry (the
  * window-element method of the EnergyPlus Engineering Reference "Daylight Factor Calculation",
  * with the Tregenza-patch daylight-coefficient form; Tregenza 1983, from memory).
  *

@@ -37,7 +37,7 @@ export interface ObstructionSpec {
   /**
    * Luminance of the obstruction's opaque part as a fraction of the sky luminance it hides.
    * Default 0.2 (BRE Digest 309 for a CIE overcast sky, via Tregenza & Sharples "Daylight
-   * algorithms" §2.21, light-at-eye.md §3.3).
+   * algorithms" §2.21).
    */
   readonly luminanceFraction?: number;
 }

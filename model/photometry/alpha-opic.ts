@@ -69,7 +69,7 @@ export interface AlphaOpicOptions {
   /**
    * Transmittance applied at the eye before the α-opic weighting only, e.g. the observer's lens
    * relative to the 32-year-old reference observer (lens-aging.ts). Photopic illuminance stays
-   * that of the standard observer; K_α,v^D65 stays the reference value (CIE S 026:2018).
+   * that of the standard observer; K_α,v^D65 stays the standard value (CIE S 026:2018).
    */
   readonly eyeTransmittance?: Transmittance;
 }

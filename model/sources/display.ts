@@ -4,7 +4,7 @@
  * typical of an LED-backlit or emissive display (representative values chosen by us, from
  * memory); the normal white point is D65 (x 0.3127, y 0.3290, CIE 015:2018), the default night
  * white point lies on the Planckian locus at 3400 K (a representative strong warm-shift
- * setting; night modes commonly reach about 3000–4000 K, see shared light-at-eye reference §5.3).
+ * setting; night modes commonly reach about 3000–4000 K, from memory).
  *
  * Physics: the white of the display is the mix of the primaries that has the white-point
  * chromaticity (three-primary-mix.ts). In normal mode full brightness gives

@@ -58,8 +58,8 @@ export function sunTimes(date: CalendarDate, observer: Observer, utcOffset_h: nu
   if (!Number.isFinite(day0Ms)) throw new RangeError('date: not a valid calendar date');
   const deltaT_s = options.deltaT_s ?? defaultDeltaT_s(date.year + (date.month - 0.5) / 12);
   const jd0 = julianDayFromEpochMs(day0Ms);
-  const nu = geocentricSun(jd0, deltaT_s).nu_deg; // A.2.1: ν at the reference instant
-  // A.2.2: α, δ one day before, at and one day after the reference instant (ΔT = 0).
+  const nu = geocentricSun(jd0, deltaT_s).nu_deg; // A.2.1: ν at the given instant
+  // A.2.2: α, δ one day before, at and one day after the given instant (ΔT = 0).
   const g = [geocentricSun(jd0 - 1, 0), geocentricSun(jd0, 0), geocentricSun(jd0 + 1, 0)] as const;
   const alpha = g.map((s) => s.alpha_deg);
   const delta = g.map((s) => s.delta_deg);

@@ -1,7 +1,7 @@
 /**
  * EPW data-line fields the product reads, with their 1-based column, unit and missing-value
  * rule. Layout and missing codes: EnergyPlus Auxiliary Programs, "EnergyPlus Weather File (EPW)
- * Data Dictionary" (as summarised in the product's light-at-eye reference §2.1).
+ * Data Dictionary".
  */
 export interface EpwFieldSpec {
   /** Key in EpwRecords. */

@@ -6,7 +6,7 @@
  *  - Fernbrook open-plan office: a desk worker on a regular week.
  * The 14 days start on Monday 23 March 2026 and cross the change to summer time on 29 March.
  * Light levels are planning values: ward and office eye illuminances about half of the desk
- * illuminance (light-at-eye reference §5.1: E_v ≈ 0.5 × E_h, common practice).
+ * illuminance (E_v ≈ 0.5 × E_h, common practice).
  */
 import type { ScenarioInput } from '../schema/scenario-types.js';
 

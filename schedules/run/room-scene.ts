@@ -4,8 +4,8 @@
  * eye-series.ts (the scenario describes them by what they give at the eye), so the scene holds
  * windows only.
  *  - Eye point: `viewingPosition.distanceFromWindow_m` from the first window's wall (default
- *    half the room depth), eye height from the same (default 1.2 m seated, light-at-eye
- *    reference §6.1); windows on the opposite wall are seen from depth − distance, windows on a
+ *    half the room depth), eye height from the same (default 1.2 m seated, common
+ *    practice); windows on the opposite wall are seen from depth − distance, windows on a
  *    side wall from half the width. Each window centred on the eye's perpendicular.
  *  - Blinds rules: none → open; always-down → lowered; down-at-night → lowered from sunset to
  *    sunrise of the run's middle day (local clock); manual-sun → sun-on-work-area, raised on the

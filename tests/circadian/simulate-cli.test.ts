@@ -31,7 +31,7 @@ describe('zeitlight simulate', () => {
     const cbt = doc.cbtmin_h as number[];
     const dlmo = doc.dlmo_h as number[];
     expect(cbt.length).toBe(3);
-    // entrained 23:00–07:00 sleeper: CBTmin 1.5–3.5 h before the 07:00 wake (reference §11.1)
+    // entrained 23:00–07:00 sleeper: CBTmin 1.5–3.5 h before the 07:00 wake (from memory)
     cbt.forEach((c) => expect(7 - (c % 24)).toBeGreaterThan(1.5));
     dlmo.forEach((d, i) => expect((cbt[i] as number) - d).toBe(7));
     expect((doc.kss_hourly as unknown[]).length).toBe(72);

@@ -1,5 +1,5 @@
 // The "Methods and assumptions" section in plain words, summarising docs/methods/*.md. Every
-// model carries the reference given there; the conversion constant is the one of
+// model carries the citation given there; the conversion constant is the one of
 // docs/methods/circadian.md §2 (melanopic DER of CIE FL2, computed from the CIE tables).
 
 export interface ModelEntry {
