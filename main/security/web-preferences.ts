@@ -3,24 +3,6 @@
 // sandboxed renderer without Node, no webviews, no insecure content.
 import type { WebPreferences } from 'electron';
 
-export function secureWebPreferences(preloadPath: string): WebPreferences {
-  return {
-    preload: preloadPath,
-    contextIsolation: true,
-    nodeIntegration: false,
-    nodeIntegrationInWorker: false,
-    nodeIntegrationInSubFrames: false,
-    sandbox: true,
-    webSecurity: true,
-    allowRunningInsecureContent: false,
-    webviewTag: false,
-    experimentalFeatures: false,
-    navigateOnDragDrop: false,
-    safeDialogs: true,
-    spellcheck: false,
-  };
-}
-
 /** The preferences that must hold for a window to count as secure (checked by tests and at startup). */
 export const REQUIRED_SECURITY_SETTINGS = {
   contextIsolation: true,
@@ -32,6 +14,17 @@ export const REQUIRED_SECURITY_SETTINGS = {
   allowRunningInsecureContent: false,
   webviewTag: false,
 } as const satisfies WebPreferences;
+
+export function secureWebPreferences(preloadPath: string): WebPreferences {
+  return {
+    preload: preloadPath,
+    ...REQUIRED_SECURITY_SETTINGS,
+    experimentalFeatures: false,
+    navigateOnDragDrop: false,
+    safeDialogs: true,
+    spellcheck: false,
+  };
+}
 
 /** Lists every required setting the given preferences violate (empty when secure). */
 export function securityViolations(prefs: WebPreferences | undefined): string[] {
