@@ -19,6 +19,10 @@ if (container !== null) {
   );
 }
 
+// What the workspace did (finished runs, notices, cohort readouts), readable after the screen has
+// moved on: `__zeitlightActivity()` in the page returns the entries, oldest first.
+Object.defineProperty(globalThis, '__zeitlightActivity', { value: () => controller.store.activity.entries(), configurable: true });
+
 void controller.start();
 
 window.addEventListener('beforeunload', (event) => {

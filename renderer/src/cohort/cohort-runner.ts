@@ -5,6 +5,7 @@ import { populationCohortSpread } from '../../../model/cohort/occupant-traits.js
 import type { ConvergenceCheckpoint } from '../../../model/cohort/convergence.js';
 import type { ScenarioInput } from '../scenario/scenario-types.js';
 import { runCohortOnPool, type CohortOutcome, type WorkerLike } from './cohort-pool.js';
+import type { ActivityLog } from '../state/activity-log.js';
 
 export interface CohortSettings {
   /** Occupants per person (the most; the stop rule may end sooner). */
@@ -38,6 +39,8 @@ export class CohortRunner {
     private readonly createWorker: () => WorkerLike,
     private readonly workerCount: () => number,
     private readonly now: () => number = () => performance.now(),
+    /** Where progress and readouts are recorded for later reading (tests, run records). */
+    private readonly activity: ActivityLog | null = null,
   ) {}
 
   subscribe = (listener: () => void): (() => void) => {
@@ -59,17 +62,23 @@ export class CohortRunner {
     const personas: Record<string, PersonaProgress> = Object.fromEntries(settings.personaIds.map((id) => [id, { completed: 0, size: settings.size, checkpoint: null }]));
     const total = settings.size * settings.personaIds.length;
     this.set({ status: 'running', settings, workers: Math.min(workers, total), completed: 0, total, personas });
+    this.activity?.record('cohort-started', { total, workers: Math.min(workers, total), seed: settings.seed });
     const run = runCohortOnPool(this.createWorker, workers, { scenario, personaIds: settings.personaIds, size: settings.size, seed: settings.seed, spread: populationCohortSpread(settings.ageRange_y), stopRule: settings.stopRule }, (p) => {
       const s = this.state;
       if (s.status !== 'running' || this.current !== run) return;
       const before = s.personas[p.personaId];
+      if (p.checkpoint !== null && p.checkpoint !== before?.checkpoint) {
+        this.activity?.record('cohort-readout', { personaId: p.personaId, completed: p.completed, occupants: p.checkpoint.occupants, metrics: Object.keys(p.checkpoint.metrics).length, converged: p.checkpoint.converged });
+      }
       this.set({ ...s, completed: p.overallCompleted, personas: { ...s.personas, [p.personaId]: { completed: p.completed, size: p.size, checkpoint: p.checkpoint ?? before?.checkpoint ?? null } } });
     });
     this.current = run;
     return run.done.then((outcome) => {
       if (this.current === run) {
         this.current = null;
-        this.set({ status: 'done', settings, outcome, scenario, elapsed_s: (this.now() - started) / 1000 });
+        const elapsed_s = (this.now() - started) / 1000;
+        this.activity?.record('cohort-finished', { occupants: outcome.personas.reduce((n, pc) => n + pc.occupants, 0), workers: outcome.workers, elapsed_s });
+        this.set({ status: 'done', settings, outcome, scenario, elapsed_s });
       }
       return outcome;
     });

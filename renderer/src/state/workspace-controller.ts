@@ -15,6 +15,7 @@ import { briefingCohort } from '../cohort/cohort-ranges.js';
 import { createCohortWorker } from '../cohort/web-cohort-worker.js';
 import type { CohortSummary } from '../../report/src/briefing-document.js';
 import { isDirty, WorkspaceStore } from './workspace-store.js';
+import { EnsembleStore } from './ensemble-store.js';
 
 const EDIT_REPORT_DELAY_MS = 500;
 
@@ -32,7 +33,16 @@ function parseScenario(text: string): ScenarioInput | string {
 export class WorkspaceController {
   readonly store = new WorkspaceStore();
   /** Cohort runs on navigator.hardwareConcurrency Web Workers. */
-  readonly cohort = new CohortRunner(createCohortWorker, () => (typeof navigator === 'undefined' ? 2 : navigator.hardwareConcurrency || 2));
+  readonly cohort = new CohortRunner(
+    createCohortWorker,
+    () => (typeof navigator === 'undefined' ? 2 : navigator.hardwareConcurrency || 2),
+    () => performance.now(),
+    this.store.activity,
+  );
+  /** Ranges across the model ensemble for the results on screen (they arrive after the results). */
+  readonly ensemble = new EnsembleStore();
+  /** The run whose results are on screen, to match its ensemble when that arrives. */
+  private lastResults: { readonly runId: number; readonly view: ResultsView } | null = null;
   private worker: Worker | null = null;
   private readonly scheduler: RunScheduler;
   private lastRunScenario: ScenarioInput | null = null;
@@ -124,7 +134,8 @@ export class WorkspaceController {
   /** Prints the client briefing of the results on screen (cohort ranges included when a cohort was run). */
   async exportPdf(): Promise<void> {
     const state = this.store.getSnapshot();
-    const view = this.shownView();
+    const shown = this.shownView();
+    const view = shown === null ? null : this.ensemble.viewWithEnsemble(shown);
     if (state.history.present === null || view === null) {
       this.store.notify('There are no results for a briefing yet.', 'error');
       return;
@@ -214,6 +225,10 @@ export class WorkspaceController {
   }
 
   private onWorkerMessage(message: WorkerToPage): void {
+    if (message.type === 'ensemble') {
+      if (this.lastResults !== null && message.runId === this.lastResults.runId) this.ensemble.set(this.lastResults.view, message.ensemble);
+      return;
+    }
     if (!this.scheduler.isCurrent(message.runId)) return;
     switch (message.type) {
       case 'progress':
@@ -228,6 +243,7 @@ export class WorkspaceController {
         return;
       case 'results':
         this.scheduler.finished(message.runId);
+        this.lastResults = { runId: message.runId, view: message.view };
         this.store.setResults({ status: 'ready', view: message.view });
         return;
       case 'unavailable':

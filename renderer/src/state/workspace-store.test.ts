@@ -33,4 +33,19 @@ describe('workspace store', () => {
     store.edit((s) => ({ ...s, name: 'Renamed' }));
     expect(calls).toBe(2);
   });
+
+  it('records each finished run and each notice in its activity log, after the screen has moved on', () => {
+    const store = new WorkspaceStore();
+    store.setResults({ status: 'running', fraction: 0, stage: 'Starting', previous: null });
+    store.setResults({ status: 'running', fraction: 0.5, stage: 'Light at the eye', previous: null });
+    store.setResults({ status: 'failed', message: 'Fix the problems listed below to see results.' });
+    store.notify('Exported the briefing.');
+    store.clearNotice();
+    expect(store.getSnapshot().notice).toBeNull();
+    expect(store.activity.entries().map((e) => [e.kind, e.detail.status ?? e.detail.text])).toEqual([
+      ['results', 'running'],
+      ['results', 'failed'],
+      ['notice', 'Exported the briefing.'],
+    ]);
+  });
 });

@@ -5,6 +5,7 @@ import type { ScenarioProblem } from '../../../schedules/validation/problem.js';
 import type { ResultsView } from '../results/view-model.js';
 import type { ScenarioInput } from '../scenario/scenario-types.js';
 import { applyEdit, canRedo, canUndo, redo, startHistory, undo, type History } from './history.js';
+import { ActivityLog } from './activity-log.js';
 
 export type ResultsState =
   | { readonly status: 'idle' }
@@ -47,6 +48,8 @@ export class WorkspaceStore {
     notice: null,
   };
   private readonly listeners = new Set<Listener>();
+  /** What happened, kept after the screen has moved on (results runs, notices). */
+  readonly activity = new ActivityLog();
 
   constructor(private readonly now: () => number = () => Date.now()) {}
 
@@ -91,6 +94,10 @@ export class WorkspaceStore {
   }
 
   setResults(results: ResultsState): void {
+    const before = this.state.results.status;
+    if (results.status !== before || results.status === 'ready') {
+      this.activity.record('results', { status: results.status, message: 'message' in results ? results.message : null });
+    }
     this.set({ results });
   }
 
@@ -103,6 +110,7 @@ export class WorkspaceStore {
   }
 
   notify(text: string, tone: 'info' | 'error' = 'info'): void {
+    this.activity.record('notice', { text, tone });
     this.set({ notice: { text, tone } });
   }
 

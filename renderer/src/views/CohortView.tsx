@@ -12,7 +12,7 @@ import { rangeRows } from '../cohort/cohort-ranges.js';
 import { COHORT_METRICS } from '../cohort/occupant-job.js';
 import { convergenceOptionsFor } from '../cohort/cohort-pool.js';
 import { formatNumber } from '../charts/comparison-data.js';
-import { metricKey } from '../../../model/cohort/convergence.js';
+import { metricKey, type ConvergenceCheckpoint } from '../../../model/cohort/convergence.js';
 
 const READOUT_METRICS = ['phaseShift_h', 'melatoninSuppression_pct', 'kss7Share_pct', 'phaseAngle_h'] as const;
 const metricInfo = (id: string) => COHORT_METRICS.find((m) => m.id === id);
@@ -24,19 +24,26 @@ function strategiesOf(view: ResultsView | null, scenario: ScenarioInput, persona
   return names.filter((s) => ran.size === 0 || ran.has(s.id));
 }
 
-function Readout({ state, scenario }: { state: Extract<CohortState, { status: 'running' }>; scenario: ScenarioInput }) {
-  const options = convergenceOptionsFor(state.settings.size);
+/** One person's place in the readout: occupants finished and the latest checkpoint. */
+interface ReadoutRow {
+  readonly personaId: string;
+  readonly completed: number;
+  readonly checkpoint: ConvergenceCheckpoint | null;
+}
+
+/** The running convergence readout while a cohort runs, and its last state once it has finished. */
+function Readout({ rows: people, size, scenario }: { rows: readonly ReadoutRow[]; size: number; scenario: ScenarioInput }) {
+  const options = convergenceOptionsFor(size);
   return (
     <div className="cohort-readout">
-      {state.settings.personaIds.map((pid) => {
-        const p = state.personas[pid];
+      {people.map(({ personaId: pid, completed, checkpoint }) => {
         const name = scenario.personas.find((x) => x.id === pid)?.name ?? pid;
-        const cp = p?.checkpoint ?? null;
+        const cp = checkpoint;
         const rows = cp === null ? [] : Object.entries(cp.metrics).filter(([key]) => READOUT_METRICS.some((m) => key.endsWith(`/${m}`)));
         return (
           <table key={pid} className="data-table readout-table" aria-label={`Convergence for ${name}`}>
             <caption>
-              {name}: {p?.completed ?? 0} of {state.settings.size} occupants{cp === null ? '' : ` — readout after ${cp.occupants} in order${cp.converged ? ', settled' : ''}`}
+              {name}: {completed} of {size} occupants{cp === null ? '' : ` — readout after ${cp.occupants} in order${cp.converged ? ', settled' : ''}`}
             </caption>
             {rows.length > 0 && (
               <>
@@ -174,7 +181,7 @@ export function CohortView({ scenario }: { scenario: ScenarioInput }) {
             {cohort.completed} of at most {cohort.total} occupants on {cohort.workers} worker{cohort.workers === 1 ? '' : 's'}
             {cohort.settings.stopRule ? ` — stops early once the running median and IQR change less than the tolerance over a batch of ${convergenceOptionsFor(cohort.settings.size).batchSize}` : ''}
           </p>
-          <Readout state={cohort} scenario={scenario} />
+          <Readout rows={cohort.settings.personaIds.map((id) => ({ personaId: id, completed: cohort.personas[id]?.completed ?? 0, checkpoint: cohort.personas[id]?.checkpoint ?? null }))} size={cohort.settings.size} scenario={scenario} />
         </div>
       )}
       {cohort.status === 'done' && (
@@ -232,6 +239,10 @@ export function CohortView({ scenario }: { scenario: ScenarioInput }) {
               </article>
             );
           })}
+          <details className="cohort-final-readout">
+            <summary>How the ranges settled: the convergence readout at the end of the run</summary>
+            <Readout rows={cohort.outcome.personas.map((pc) => ({ personaId: pc.personaId, completed: pc.occupants, checkpoint: pc.checkpoints.at(-1) ?? null }))} size={cohort.settings.size} scenario={scenario} />
+          </details>
         </div>
       )}
       {cohort.status === 'idle' && <p className="empty">Choose the number of occupants and run the cohort. It runs on {typeof navigator === 'undefined' ? 'every' : (navigator.hardwareConcurrency ?? 'every')} cores; editing stays possible meanwhile.</p>}
