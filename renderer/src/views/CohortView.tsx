@@ -7,7 +7,7 @@ import type { ResultsView } from '../results/view-model.js';
 import type { ScenarioInput } from '../scenario/scenario-types.js';
 import { Cautions } from './ResultsFrame.js';
 import { CohortRangeChart } from './CohortRangeChart.js';
-import { DEFAULT_COHORT_SETTINGS, type CohortState } from '../cohort/cohort-runner.js';
+import { DEFAULT_COHORT_SETTINGS } from '../cohort/cohort-runner.js';
 import { rangeRows } from '../cohort/cohort-ranges.js';
 import { COHORT_METRICS } from '../cohort/occupant-job.js';
 import { convergenceOptionsFor } from '../cohort/cohort-pool.js';
