@@ -8,7 +8,7 @@
  * convention: DLMO at ψ = 5π/12, CBTmin at ψ = π, i.e. 7 h apart; used for every model).
  */
 import type { Integrator } from '../solver/integrator.js';
-import { entrain, dailySleepPattern, type EntrainResult } from './entrain.js';
+import { daySleepSpec, entrain, type EntrainResult } from './entrain.js';
 import type { LightSeries } from './light-series.js';
 import type { MelatoninNight } from './melatonin-pass.js';
 import type { PersonParams } from './pacemaker.js';
@@ -32,13 +32,15 @@ export interface BodyClockInput {
   readonly modelId?: PacemakerId;
   /** Light at the eye from t = 0 (local midnight of day 0); the last value holds to the end. */
   readonly light: LightSeries;
+  /** Light behind closed eyelids on the same axis, read while asleep (default light × eyelid transmission). */
+  readonly lightEyesClosed?: LightSeries;
   readonly days: number;
   /** Prescribed sleep or free (predicted) sleep; default free without alarm. */
   readonly sleep?: SleepSpec;
   /** Default entrained to day 0 of the light and sleep. */
   readonly init?: InitialCondition;
   readonly person?: PersonParams;
-  /** Fraction of light reaching the eye in sleep (default 0). */
+  /** Melanopic transmittance of the closed eyelids without `lightEyesClosed` (default that of CIE FL2, 0.30 %). */
   readonly eyelidTransmission?: number;
   readonly integrator?: Integrator;
   /** Sample spacing for curves (h, default 0.25). */
@@ -109,11 +111,11 @@ export function runBodyClock(input: BodyClockInput): BodyClockResult {
   let initial: SimState;
   let entrainment: EntrainResult | undefined;
   if (init.kind === 'entrained') {
-    const daySleep: SleepSpec = sleep.mode === 'prescribed' ? { mode: 'prescribed', episodes: dailySleepPattern(sleep.episodes) } : sleep;
     entrainment = entrain({
       model,
       light: input.light,
-      sleep: daySleep,
+      ...(input.lightEyesClosed === undefined ? {} : { lightEyesClosed: input.lightEyesClosed }),
+      sleep: daySleepSpec(sleep),
       ...(input.eyelidTransmission === undefined ? {} : { eyelidTransmission: input.eyelidTransmission }),
       ...(input.integrator === undefined ? {} : { integrator: input.integrator }),
     });
@@ -125,6 +127,7 @@ export function runBodyClock(input: BodyClockInput): BodyClockResult {
   const run = simulate({
     model,
     light: input.light,
+    ...(input.lightEyesClosed === undefined ? {} : { lightEyesClosed: input.lightEyesClosed }),
     sleep,
     initial,
     end_h: 24 * input.days,

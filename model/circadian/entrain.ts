@@ -23,7 +23,9 @@ export interface EntrainOptions {
   readonly model: Pacemaker;
   /** Light of day 0 (only [0, 24) is used, repeated). */
   readonly light: LightSeries;
-  /** Sleep of day 0: prescribed episodes within [0, 24) (may run past 24 h), or free. */
+  /** Light of day 0 behind closed eyelids (only [0, 24) is used, repeated); default light × eyelid transmission. */
+  readonly lightEyesClosed?: LightSeries;
+  /** Sleep of day 0: prescribed episodes within [0, 24) (may run past 24 h), or free (with day 0's wake windows). */
   readonly sleep: SleepSpec;
   readonly lightSensitivity?: number;
   readonly eyelidTransmission?: number;
@@ -69,10 +71,19 @@ function rebase(s: SimState, by_h: number): SimState {
   };
 }
 
+/** Day 0 of a sleep spec wrapped onto the 24 h clock: prescribed episodes, or a free sleeper's wake windows. */
+export function daySleepSpec(sleep: SleepSpec): SleepSpec {
+  if (sleep.mode === 'prescribed') return { mode: 'prescribed', episodes: dailySleepPattern(sleep.episodes) };
+  return sleep.wakeWindows === undefined ? sleep : { ...sleep, wakeWindows: dailySleepPattern(sleep.wakeWindows) };
+}
+
 export function entrain(opts: EntrainOptions): EntrainResult {
   const pattern = opts.sleep.mode === 'prescribed' ? dailySleepPattern(opts.sleep.episodes) : [];
-  const sleepFor = (day: number): SleepSpec =>
-    opts.sleep.mode === 'prescribed' ? { mode: 'prescribed', episodes: repeatDaily(pattern, day, day + 1) } : opts.sleep;
+  const windows = opts.sleep.mode === 'free' && opts.sleep.wakeWindows !== undefined ? dailySleepPattern(opts.sleep.wakeWindows) : undefined;
+  const sleepFor = (day: number): SleepSpec => {
+    if (opts.sleep.mode === 'prescribed') return { mode: 'prescribed', episodes: repeatDaily(pattern, day, day + 1) };
+    return windows === undefined ? opts.sleep : { ...opts.sleep, wakeWindows: windows.length === 0 ? [] : repeatDaily(windows, day, day + 1) };
+  };
   const asleepAtMidnight = pattern.some((e) => e.start_h <= 0 && e.end_h > 0);
   let state = stateFromPacemaker(opts.model, opts.model.seedState, opts.sleep, 0, !asleepAtMidnight);
   let prevMarker = Number.NaN;
@@ -83,6 +94,7 @@ export function entrain(opts: EntrainOptions): EntrainResult {
     const run = simulate({
       model: opts.model,
       light: opts.light,
+      ...(opts.lightEyesClosed === undefined ? {} : { lightEyesClosed: opts.lightEyesClosed }),
       periodicLight: true,
       sleep: sleepFor(day),
       initial: state,

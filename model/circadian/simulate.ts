@@ -17,7 +17,8 @@
 import type { Integrator } from '../solver/integrator.js';
 import { createOdexIntegrator } from '../solver/odex-integrator.js';
 import { nativeLightSeries } from './calibration.js';
-import { segmentIndexAt, type LightSeries } from './light-series.js';
+import { calibrationEyelidTransmission, receivedLightSeries } from './eyes-closed-light.js';
+import { scaledLightSeries, segmentIndexAt, type LightSeries } from './light-series.js';
 import { cycleAngleAtTime, cycleTimeAtAngle, darkLimitCycle, equivalentState, type LimitCycleTable } from './limit-cycle.js';
 import { melatoninPass, type MelatoninNight, type MelatoninState, type SynthesisSwitch } from './melatonin-pass.js';
 import { ST_HILAIRE_MELATONIN as MEL } from './melatonin-sthilaire.js';
@@ -27,7 +28,7 @@ import { createJfkX7 } from './jfk-x7.js';
 import { createPacemaker, isPacemakerId } from './registry.js';
 import { HCL_PRESETS, hclCircadianModulation, type HclParams } from './sleep-switch-hcl.js';
 import { HOMEOSTAT_SEED_NM, homeostatPass, kss, postnovaCircadianDrive } from './sleepiness-postnova.js';
-import { DEFAULT_EYELID_TRANSMISSION, normalisedEpisodes, type SleepEpisode, type SleepSpec } from './sleep-input.js';
+import { normalisedEpisodes, type SleepEpisode, type SleepSpec } from './sleep-input.js';
 
 const DEG = Math.PI / 180;
 const BISECTION_ITERATIONS = 40;
@@ -38,8 +39,13 @@ const MIN_MARKER_SPACING_H = 2;
 
 export interface SimulationOptions {
   readonly model: Pacemaker;
-  /** Light at the eye (melanopic EDI or native lux). */
+  /** Light at the open eye (melanopic EDI or native lux), read while awake. */
   readonly light: LightSeries;
+  /**
+   * Light behind the closed eyelids (melanopic EDI or native lux), read while asleep; same time
+   * axis and periodicity as `light`. Default: `light` × `eyelidTransmission`.
+   */
+  readonly lightEyesClosed?: LightSeries;
   /** When true, light(t) = light(t mod 24) (a repeated day, used for entrainment). */
   readonly periodicLight?: boolean;
   readonly sleep: SleepSpec;
@@ -49,6 +55,10 @@ export interface SimulationOptions {
   readonly initial?: SimState;
   /** Overrides the pacemaker's own light-sensitivity multiplier. */
   readonly lightSensitivity?: number;
+  /**
+   * Melanopic transmittance of the closed eyelids (0–1) used without `lightEyesClosed`; default
+   * that of the calibration source CIE FL2 (0.30 %, eyes-closed-light.ts).
+   */
   readonly eyelidTransmission?: number;
   readonly integrator?: Integrator;
   /** Spacing of stored samples (h); default 0.25. */
@@ -209,8 +219,11 @@ export function simulate(opts: SimulationOptions): SimulationRun {
   const tools = phaseTools(model);
   const sens = opts.lightSensitivity ?? model.lightSensitivity;
   if (!(sens > 0)) throw new Error(`lightSensitivity must be > 0 (got ${sens})`);
-  const eyelid = opts.eyelidTransmission ?? DEFAULT_EYELID_TRANSMISSION;
+  const eyelid = opts.eyelidTransmission ?? calibrationEyelidTransmission();
   if (!(eyelid >= 0 && eyelid <= 1)) throw new Error(`eyelidTransmission must be within 0–1 (got ${eyelid})`);
+  const lightClosed = opts.lightEyesClosed === undefined ? scaledLightSeries(light, eyelid, 'native_lx') : nativeLightSeries(opts.lightEyesClosed);
+  // Wake windows (free sleep): held awake inside, a possible sleep onset at each end.
+  const wakeWindows = opts.sleep.mode === 'free' ? normalisedEpisodes(opts.sleep.wakeWindows ?? [], 'wake window') : [];
   const integrator = opts.integrator ?? createOdexIntegrator();
   const sampleStep = opts.sampleStep_h ?? 0.25;
   const t0 = opts.initial?.t_h ?? opts.start_h ?? 0;
@@ -240,15 +253,31 @@ export function simulate(opts: SimulationOptions): SimulationRun {
   // Times within BREAK_TOL_H of a breakpoint count as on it: a breakpoint shifted by whole days
   // (24 k + s − 24 k) may come back a few ulps off.
   const dayStartOf = (t: number) => (periodic ? 24 * Math.floor((t + BREAK_TOL_H) / 24) : 0);
-  const segmentAt = (t: number, d0: number) => segmentIndexAt(light, t - d0 + BREAK_TOL_H);
-  const nextLightBreak = (t: number): number => {
+  const segmentAt = (series: LightSeries, t: number, d0: number) => segmentIndexAt(series, t - d0 + BREAK_TOL_H);
+  const nextLightBreak = (series: LightSeries, t: number): number => {
     const d0 = dayStartOf(t);
-    const idx = segmentAt(t, d0);
-    const nxt = light.start_h[idx + 1];
+    const idx = segmentAt(series, t, d0);
+    const nxt = series.start_h[idx + 1];
     if (!periodic) return nxt ?? Infinity;
     return nxt !== undefined && nxt < 24 ? d0 + nxt : d0 + 24;
   };
   const nextAlarm = (t: number): number => (alarm === undefined ? Infinity : alarm + 24 * (Math.floor((t - alarm) / 24 + 1e-12) + 1));
+  const heldAwakeAt = (t: number): boolean => wakeWindows.some((w) => t >= w.start_h - 1e-9 && t < w.end_h - 1e-9);
+  const windowEndsAt = (t: number): boolean => wakeWindows.some((w) => Math.abs(w.end_h - t) < 1e-9);
+  const nextWindowEdge = (t: number): number => {
+    for (const w of wakeWindows) {
+      if (w.start_h > t + 1e-9) return w.start_h;
+      if (w.end_h > t + 1e-9) return w.end_h;
+    }
+    return Infinity;
+  };
+  /** ≥ 0 once the HCL state y has reached the threshold that ends the sleep/wake state `awakeNow`. */
+  const hclGapOf = (yv: readonly number[], awakeNow: boolean): number => {
+    const [cx, cxc] = cubicEquivalent(model, tools, yv);
+    const c = hclCircadianModulation(hcl, cx, cxc);
+    const h = yv[hclIndex] as number;
+    return awakeNow ? h - (hcl.upper + c) : hcl.lower + c - h;
+  };
   const addMarker = (tm: number) => {
     const last = xmin[xmin.length - 1];
     if (last !== undefined && tm - last < MIN_MARKER_SPACING_H) return;
@@ -263,6 +292,10 @@ export function simulate(opts: SimulationOptions): SimulationRun {
     samples.hclPressure.push(hclIndex >= 0 ? get(hclIndex) : Number.NaN);
   };
 
+  if (free && !awake && heldAwakeAt(t0)) {
+    awake = true;
+    sleepStart = Number.NaN;
+  }
   let t = t0;
   let y = [...initial.y];
   if (Math.abs(nextSample - t) < 1e-9) {
@@ -274,14 +307,18 @@ export function simulate(opts: SimulationOptions): SimulationRun {
 
   while (t < tEnd - 1e-12) {
     const d0 = dayStartOf(t);
-    const idx = segmentAt(t, d0);
-    const smooth = light.smooth?.[idx];
-    const level = light.level[idx] as number;
-    const gate = (awake ? 1 : eyelid) * sens;
+    // open eyes awake, closed eyelids asleep
+    const lit = awake ? light : lightClosed;
+    const idx = segmentAt(lit, t, d0);
+    const smooth = lit.smooth?.[idx];
+    const level = lit.level[idx] as number;
+    const gate = sens;
     const wake = awake ? 1 : 0;
+    const held = free && awake && heldAwakeAt(t);
     const nextEp = free ? undefined : nextPrescribedTransition(episodes, t);
-    let tStop = Math.min(tEnd, nextLightBreak(t), nextEp?.t_h ?? Infinity);
+    let tStop = Math.min(tEnd, nextLightBreak(lit, t), nextEp?.t_h ?? Infinity);
     if (free && !awake) tStop = Math.min(tStop, nextAlarm(t));
+    if (free) tStop = Math.min(tStop, nextWindowEdge(t));
 
     const rhs = (tq: number, yq: readonly number[]): number[] => {
       const I = gate * (smooth === undefined ? level : Math.max(0, smooth(tq - d0)));
@@ -311,11 +348,10 @@ export function simulate(opts: SimulationOptions): SimulationRun {
       return 0.5 * (lo + hi);
     };
     /** ≥ 0 once the state has crossed the threshold that ends the current sleep/wake state. */
+    const yAt = new Array<number>(size).fill(0);
     const hclGap = (dense: Dense, tq: number): number => {
-      const [cx, cxc] = cubicEquivalent(model, tools, [dense(0, tq), dense(1, tq), dense(2, tq)]);
-      const c = hclCircadianModulation(hcl, cx, cxc);
-      const h = dense(hclIndex, tq);
-      return awake ? h - (hcl.upper + c) : hcl.lower + c - h;
+      for (let i = 0; i < size; i++) yAt[i] = dense(i, tq);
+      return hclGapOf(yAt, awake);
     };
 
     let switchAt: number | undefined;
@@ -365,7 +401,7 @@ export function simulate(opts: SimulationOptions): SimulationRun {
         synOff.push(off + MEL.synDelay_h);
         switches.push({ t_h: off + MEL.synDelay_h, on: false });
       }
-      if (hclIndex >= 0 && hclGap(dense, tNew) >= 0 && hclGap(dense, tOld) < 0) {
+      if (hclIndex >= 0 && !held && hclGap(dense, tNew) >= 0 && hclGap(dense, tOld) < 0) {
         let lo = tOld;
         let hi = tNew;
         for (let k = 0; k < BISECTION_ITERATIONS; k++) {
@@ -389,23 +425,27 @@ export function simulate(opts: SimulationOptions): SimulationRun {
     if (free) {
       if (switchAt !== undefined && res.stoppedEarly) awakeNext = !awake;
       if (!awake && Math.abs(nextAlarm(t) - tNew) < 1e-9) awakeNext = true;
+      // a wake window starts: wake; one ends with the pressure already past the threshold: sleep
+      if (!awakeNext && heldAwakeAt(tNew)) awakeNext = true;
+      else if (awakeNext && !heldAwakeAt(tNew) && windowEndsAt(tNew) && hclGapOf(y, true) >= 0) awakeNext = false;
     } else if (nextEp !== undefined && Math.abs(nextEp.t_h - tNew) < 1e-9) awakeNext = nextEp.awake;
     if (awakeNext !== awake) {
       if (!awakeNext) sleepStart = tNew;
-      else sleepEpisodes.push({ start_h: sleepStart, end_h: tNew });
+      else if (tNew > sleepStart) sleepEpisodes.push({ start_h: sleepStart, end_h: tNew });
       awake = awakeNext;
     }
     if (!(tNew > t)) throw new Error(`simulation made no progress at t = ${t} h`);
     t = tNew;
   }
-  if (!awake) sleepEpisodes.push({ start_h: sleepStart, end_h: tEnd });
+  if (!awake && tEnd > sleepStart) sleepEpisodes.push({ start_h: sleepStart, end_h: tEnd });
 
-  // Pass 2: melatonin over the same period, with light gated by the sleep just found.
+  // Pass 2: melatonin over the same period, with the light received under the sleep just found
+  // (open eyes awake, closed eyelids asleep).
   const mel = melatoninPass({
-    light,
-    periodicLight: periodic,
+    light: receivedLightSeries(light, lightClosed, sleepEpisodes, t0, tEnd, periodic),
+    periodicLight: false,
     lightSensitivity: sens,
-    eyelidTransmission: eyelid,
+    eyelidTransmission: 1,
     sleep: sleepEpisodes,
     switches: switches.filter((s) => s.t_h <= tEnd),
     start_h: t0,
