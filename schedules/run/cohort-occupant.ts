@@ -14,7 +14,7 @@ import type { SleepSpec } from '../../model/circadian/sleep-input.js';
 import type { SimState } from '../../model/circadian/simulate.js';
 import type { Persona } from '../schema/scenario-types.js';
 import type { ExposureTimeline } from '../timeline/exposure-types.js';
-import { entrainedStart, pacemakerFor, runBodyClockFor, sleepSpecFor } from './body-clock-run.js';
+import { closedEyeLightSeries, entrainedStart, pacemakerFor, runBodyClockFor, sleepSpecFor } from './body-clock-run.js';
 import { fixedAwakeMinutes, shiftedSleepSpec } from './cohort-sleep-shift.js';
 import type { EyeSeries } from './eye-series.js';
 import { mergedLightSeries } from './light-segments.js';
@@ -78,8 +78,8 @@ export function runCohortOccupant(base: CohortPersonaBase, person: CohortPerson)
   let baselineCbt: number[] | undefined;
   for (const s of base.strategies) {
     const sleep = shiftedSleepSpec(s.sleep, s.timeline, person.habitualMidSleepShift_h, s.fixedAwake);
-    if (s.isBaseline) initial = entrainedStart(model, mergedLightSeries(s.eye.mel_edi_lx), sleep);
-    const bc = runBodyClockFor(model, s.eye.mel_edi_lx, sleep, initial, s.timeline.total_min);
+    if (s.isBaseline) initial = entrainedStart(model, mergedLightSeries(s.eye.mel_edi_lx), sleep, closedEyeLightSeries(s.eye.melClosed_edi_lx));
+    const bc = runBodyClockFor(model, s.eye.mel_edi_lx, sleep, initial, s.timeline.total_min, s.eye.melClosed_edi_lx);
     if (s.isBaseline) baselineCbt = bc.outcome.cbtmin_h;
     const m = strategyMetrics({ id: s.id, name: s.name, changes: s.changes, timeline: s.timeline, clock: base.clock, eye: s.eye, clockOutcome: bc.outcome, rhsEvaluations: bc.run.rhsEvaluations, baselineCbtmin_h: s.isBaseline ? undefined : baselineCbt });
     out[s.id] = m.summary;

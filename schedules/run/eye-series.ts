@@ -10,6 +10,10 @@
  * spectrum × lens-age factor (CIE S 026 age correction relative to 32 years, applied per source
  * through its spectrum) × eyewear melanopic transmittance; photopic lux × eyewear photopic
  * transmittance.
+ * Behind closed eyelids (the sleeper's eye): each source's melanopic EDI × the eyelid's melanopic
+ * transmittance for that source's spectrum as it reaches this observer's eye (spectrum × lens ×
+ * eyelid, model/photometry/eyelid-transmittance.ts; ≈ 0.3 %). A light log's closed-eye value
+ * takes the ratio of the modelled light at that minute (daylight's where the model has none).
  */
 import { evaluateEyeLight, PLACE_ELSEWHERE, PLACE_ROOM, prepareRoom, screenEyeIlluminance_lx, type OutdoorConditions, type PreparedRoom } from '../../model/eye/index.js';
 import type { MinuteLightSeries } from '../lightlog/log-to-minutes.js';
@@ -29,8 +33,12 @@ export type LightSource = (typeof LIGHT_SOURCES)[number];
 export interface EyeSeries {
   readonly total_min: number;
   readonly photopic_lx: Float64Array;
+  /** Melanopic EDI at the open eye (lx), in total and per source. */
   readonly mel_edi_lx: Float64Array;
   readonly melBySource: Readonly<Record<LightSource, Float64Array>>;
+  /** Melanopic EDI behind closed eyelids (lx), in total and per source: what reaches the eye while asleep. */
+  readonly melClosed_edi_lx: Float64Array;
+  readonly melClosedBySource: Readonly<Record<LightSource, Float64Array>>;
 }
 
 /** Share of the open-field outdoor eye illuminance under partial and full shade (assumed planning values, docs/methods/pipeline.md). */
@@ -46,16 +54,17 @@ export const STREET_LIGHT_CCT_K = 4000;
 export interface EyeCaches {
   /** Identifies the outdoor conditions of the run (site, weather, period) for the room cache. */
   readonly weatherKey: string;
-  /** Per-minute daylight melanopic DER × lens factor and lens factor, by observer age. */
-  readonly daylightFactors: Map<number, { mel: Float32Array; lens: Float32Array }>;
+  /** Per-minute daylight melanopic DER × lens factor, lens factor and eyelid factor, by observer age. */
+  readonly daylightFactors: Map<number, { mel: Float32Array; lens: Float32Array; lid: Float32Array }>;
 }
 
-function daylightFactors(outdoor: OutdoorLight, age: number, caches: EyeCaches): { mel: Float32Array; lens: Float32Array } {
+function daylightFactors(outdoor: OutdoorLight, age: number, caches: EyeCaches): { mel: Float32Array; lens: Float32Array; lid: Float32Array } {
   let f = caches.daylightFactors.get(age);
   if (f === undefined) {
     const cct = outdoor.series.skyCct_K;
     const mel = new Float32Array(cct.length);
     const lens = new Float32Array(cct.length);
+    const lid = new Float32Array(cct.length);
     let last = Number.NaN;
     let r = daylightResponse(6504, age);
     for (let m = 0; m < cct.length; m++) {
@@ -66,8 +75,9 @@ function daylightFactors(outdoor: OutdoorLight, age: number, caches: EyeCaches):
       }
       mel[m] = r.melDer * r.lensFactor;
       lens[m] = r.lensFactor;
+      lid[m] = r.eyelidFactor;
     }
-    f = { mel, lens };
+    f = { mel, lens, lid };
     caches.daylightFactors.set(age, f);
   }
   return f;
@@ -196,6 +206,7 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
   const n = timeline.total_min;
   const age = persona.age_y;
   const melBySource = { daylight: new Float64Array(n), electric: new Float64Array(n), screen: new Float64Array(n), outdoor: new Float64Array(n), measured: new Float64Array(n) };
+  const melClosedBySource = { daylight: new Float64Array(n), electric: new Float64Array(n), screen: new Float64Array(n), outdoor: new Float64Array(n), measured: new Float64Array(n) };
   const photopic = new Float64Array(n);
   const places = new Map<string, Place>(variant.places.map((p) => [p.id, p]));
   const slices = timeline.slices;
@@ -221,9 +232,9 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
 
   const streetResp = electricResponse({ kind: 'cct', cct_K: STREET_LIGHT_CCT_K }, undefined, age);
   const dayFactor = daylightFactors(outdoor, age, inp.caches);
-  // Melanopic EDI per photopic lux (DER × lens factor) of each luminaire at each target CCT, and of each screen by day / night.
-  const lumMel = new Map<Luminaire, Map<number, number>>();
-  const lumMelAt = (l: Luminaire, cct: number): number => {
+  // Melanopic EDI per photopic lux (DER × lens factor) and eyelid factor of each luminaire at each target CCT, and of each screen by day / night.
+  const lumMel = new Map<Luminaire, Map<number, { mel: number; lid: number }>>();
+  const lumMelAt = (l: Luminaire, cct: number): { mel: number; lid: number } => {
     let m = lumMel.get(l);
     if (m === undefined) {
       m = new Map();
@@ -232,18 +243,21 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
     let v = m.get(cct);
     if (v === undefined) {
       const r = electricResponse(l.spectrum, Number.isFinite(cct) ? cct : undefined, age);
-      v = r.melDer * r.lensFactor;
+      v = { mel: r.melDer * r.lensFactor, lid: r.eyelidFactor };
       m.set(cct, v);
     }
     return v;
   };
-  const scrMel = new Map<Screen, [number, number]>();
-  const scrMelAt = (sc: Screen, night: boolean): number => {
+  const scrMel = new Map<Screen, [{ mel: number; lid: number }, { mel: number; lid: number }]>();
+  const scrMelAt = (sc: Screen, night: boolean): { mel: number; lid: number } => {
     let v = scrMel.get(sc);
     if (v === undefined) {
       const d = screenResponse(sc.spectrum, undefined, age);
       const nr = sc.nightMode !== undefined ? screenResponse(sc.spectrum, sc.nightMode.cct_K, age) : d;
-      v = [d.melDer * d.lensFactor, nr.melDer * nr.lensFactor];
+      v = [
+        { mel: d.melDer * d.lensFactor, lid: d.eyelidFactor },
+        { mel: nr.melDer * nr.lensFactor, lid: nr.eyelidFactor },
+      ];
       scrMel.set(sc, v);
     }
     return night ? v[1] : v[0];
@@ -258,6 +272,9 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
     return w;
   };
   const { daylight: melDaylight, electric: melElectric, screen: melScreen, outdoor: melOutdoor } = melBySource;
+  const { daylight: lidDaylight, electric: lidElectric, screen: lidScreen, outdoor: lidOutdoor } = melClosedBySource;
+  const streetMel = streetResp.melDer * streetResp.lensFactor;
+  const streetLid = streetResp.eyelidFactor;
   for (const s of slices) {
     const ctx = exposureContext(variant, persona, s, clock.minuteOfDay[s.start_min] ?? 0);
     const place = ctx.place;
@@ -266,8 +283,8 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
     const scr = ctx.screen;
     const scrLux = scr === null ? 0 : screenEye_lx(scr, s.screenBrightness);
     const scrNight = scr === null ? undefined : nightMinutes(scr);
-    const scrMelDay = scr === null ? 0 : scrMelAt(scr, false);
-    const scrMelNight = scr === null ? 0 : scrMelAt(scr, true);
+    const scrMelDay = scr === null ? { mel: 0, lid: 0 } : scrMelAt(scr, false);
+    const scrMelNight = scr === null ? { mel: 0, lid: 0 } : scrMelAt(scr, true);
     const lums = place.kind === 'room' ? place.luminaires.map((l) => ({ l, w: weekOf(l) })) : [];
     const nL = lums.length;
     // Level and CCT arrays of each luminaire for the current day, and the last CCT's melanopic factor.
@@ -275,17 +292,21 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
     const cctToday: Float32Array[] = new Array<Float32Array>(nL);
     const lastCct = new Float64Array(nL).fill(-1);
     const lastMel = new Float64Array(nL);
+    const lastLid = new Float64Array(nL);
     let today = -1;
     const log = s.measuredLogId !== null ? inp.logs.get(s.measuredLogId) : undefined;
     for (let m = s.start_min; m < s.end_min; m++) {
       const minuteOfDay = clock.minuteOfDay[m] ?? 0;
       const dayMel = dayFactor.mel[m] ?? 1;
+      const dayLid = dayFactor.lid[m] ?? 0;
       let pDay = 0;
       let mDay = 0;
       let pEl = 0;
       let mEl = 0;
+      let cEl = 0;
       let pOut = 0;
       let mOut = 0;
+      let cOut = 0;
       const dark = (sunElevation[m] ?? 0) < ARTIFICIAL_OUTDOOR_BELOW_DEG;
       if (place.kind === 'room') {
         const k = roomAt[m] ?? -1;
@@ -313,10 +334,14 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
             const cct = (cctToday[j] as Float32Array)[minuteOfDay] ?? Number.NaN;
             if (cct !== lastCct[j]) {
               lastCct[j] = cct;
-              lastMel[j] = lumMelAt(l, cct);
+              const r = lumMelAt(l, cct);
+              lastMel[j] = r.mel;
+              lastLid[j] = r.lid;
             }
+            const mel = lux * (lastMel[j] as number);
             pEl += lux;
-            mEl += lux * (lastMel[j] as number);
+            mEl += mel;
+            cEl += mel * (lastLid[j] as number);
           }
         }
       } else if (place.kind === 'vehicle') {
@@ -325,25 +350,34 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
         mDay = lux * dayMel;
         if (dark && place.interiorIlluminance_lx > 0) {
           pEl = place.interiorIlluminance_lx;
-          mEl = pEl * streetResp.melDer * streetResp.lensFactor;
+          mEl = pEl * streetMel;
+          cEl = mEl * streetLid;
         }
       } else {
         const lux = (outdoor.outdoorEye_lx[m] ?? 0) * OUTDOOR_SHADE_FACTOR[place.shade];
         pOut = lux;
         mOut = lux * dayMel;
+        cOut = mOut * dayLid;
         if (dark) {
           pOut += place.streetLighting_lx;
-          mOut += place.streetLighting_lx * streetResp.melDer * streetResp.lensFactor;
+          mOut += place.streetLighting_lx * streetMel;
+          cOut += place.streetLighting_lx * streetMel * streetLid;
         }
       }
-      const mScr = scrNight === undefined ? 0 : scrLux * (scrNight[minuteOfDay] === 1 ? scrMelNight : scrMelDay);
+      const scrR = scrNight !== undefined && scrNight[minuteOfDay] === 1 ? scrMelNight : scrMelDay;
+      const mScr = scrNight === undefined ? 0 : scrLux * scrR.mel;
       let p = (pDay + pEl + pOut + scrLux) * pT;
       melDaylight[m] = mDay * mT;
       melElectric[m] = mEl * mT;
       melScreen[m] = mScr * mT;
       melOutdoor[m] = mOut * mT;
+      lidDaylight[m] = mDay * dayLid * mT;
+      lidElectric[m] = cEl * mT;
+      lidScreen[m] = mScr * scrR.lid * mT;
+      lidOutdoor[m] = cOut * mT;
       if (log !== undefined && log.measured[m] === 1) {
         const modelMel = (mDay + mEl + mOut + mScr) * mT;
+        const modelClosed = (lidDaylight[m] ?? 0) + (lidElectric[m] ?? 0) + (lidScreen[m] ?? 0) + (lidOutdoor[m] ?? 0);
         const ratio = p > 0 ? modelMel / p : 1;
         const lux = log.photopic_lx[m] ?? Number.NaN;
         const melLog = log.melanopicEdi_lx[m] ?? Number.NaN;
@@ -354,11 +388,19 @@ export function eyeSeries(inp: EyeSeriesInput): EyeSeries {
         melScreen[m] = 0;
         melOutdoor[m] = 0;
         melBySource.measured[m] = Math.max(0, mel);
+        lidDaylight[m] = 0;
+        lidElectric[m] = 0;
+        lidScreen[m] = 0;
+        lidOutdoor[m] = 0;
+        melClosedBySource.measured[m] = Math.max(0, mel) * (modelMel > 0 ? modelClosed / modelMel : dayLid);
       }
       photopic[m] = p;
     }
   }
-  const total = new Float64Array(n);
-  for (let m = 0; m < n; m++) total[m] = (melBySource.daylight[m] ?? 0) + (melBySource.electric[m] ?? 0) + (melBySource.screen[m] ?? 0) + (melBySource.outdoor[m] ?? 0) + (melBySource.measured[m] ?? 0);
-  return { total_min: n, photopic_lx: photopic, mel_edi_lx: total, melBySource };
+  const sum = (by: Readonly<Record<LightSource, Float64Array>>): Float64Array => {
+    const total = new Float64Array(n);
+    for (let m = 0; m < n; m++) total[m] = (by.daylight[m] ?? 0) + (by.electric[m] ?? 0) + (by.screen[m] ?? 0) + (by.outdoor[m] ?? 0) + (by.measured[m] ?? 0);
+    return total;
+  };
+  return { total_min: n, photopic_lx: photopic, mel_edi_lx: sum(melBySource), melBySource, melClosed_edi_lx: sum(melClosedBySource), melClosedBySource };
 }

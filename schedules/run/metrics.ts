@@ -6,12 +6,16 @@
  * scale; threshold common practice, model/circadian KSS_SLEEPY). Phase shift: strategy CBTmin
  * minus the nearest baseline CBTmin (within 12 h); phase angle: main-sleep onset minus the DLMO
  * before it. A day is the local calendar day (23 or 25 h on clock-change days).
+ * Melanopic doses count the light that reaches the eye: at the open eye awake, behind the closed
+ * eyelids asleep (received-light.ts); the sleep-environment figure (≤ 1 lx) is the room's light
+ * at the open eye, as Brown et al. state it.
  */
 import type { ExposureTimeline } from '../timeline/exposure-types.js';
 import type { BodyClockOutcome } from './body-clock-run.js';
 import type { EyeSeries, LightSource } from './eye-series.js';
 import { LIGHT_SOURCES } from './eye-series.js';
 import { localIsoAt, type LocalClock } from './local-clock.js';
+import { asleepMinutes, receivedMel } from './received-light.js';
 import type { DayMetrics, EventTime, SourceMap, StrategyResult, StrategySummary } from './results-types.js';
 
 export const DAYTIME_MEL_EDI_LX = 250;
@@ -69,8 +73,10 @@ export function strategyMetrics(inp: StrategyInput): Omit<StrategyResult, 'headl
     if (m >= n) return timeline.days.length;
     return clock.dayIndex[m] ?? 0;
   };
-  const asleep = new Uint8Array(n);
-  for (const e of bc.sleepEpisodes) asleep.fill(1, Math.max(0, Math.round(e.start_h * 60)), Math.min(n, Math.round(e.end_h * 60)));
+  const asleep = asleepMinutes(bc.sleepEpisodes, n);
+  const received = receivedMel(eye.mel_edi_lx, eye.melClosed_edi_lx, asleep);
+  const receivedBySource = {} as SourceMap<Float64Array>;
+  for (const src of LIGHT_SOURCES) receivedBySource[src] = receivedMel(eye.melBySource[src], eye.melClosedBySource[src], asleep);
   const work = new Uint8Array(n);
   for (const s of timeline.slices) if (s.activity === 'work') work.fill(1, s.start_min, s.end_min);
 
@@ -90,7 +96,7 @@ export function strategyMetrics(inp: StrategyInput): Omit<StrategyResult, 'headl
       return s / 60;
     };
     const bySource = {} as SourceMap<number>;
-    for (const src of LIGHT_SOURCES) bySource[src as LightSource] = round(dose(eye.melBySource[src]), 2);
+    for (const src of LIGHT_SOURCES) bySource[src as LightSource] = round(dose(receivedBySource[src]), 2);
     let bright = 0;
     let awakeMin = 0;
     let workMin = 0;
@@ -132,7 +138,7 @@ export function strategyMetrics(inp: StrategyInput): Omit<StrategyResult, 'headl
     return {
       index: d.index,
       date: d.date,
-      mel_dose_lx_h: round(dose(eye.mel_edi_lx), 2),
+      mel_dose_lx_h: round(dose(received), 2),
       mel_dose_by_source_lx_h: bySource,
       daytime_hours_ge_250_lx: round(bright / 60, 3),
       awake_hours: round(awakeMin / 60, 3),

@@ -3,7 +3,9 @@
  *  exposure.csv — light at the eye every EXPOSURE_STEP_MIN real minutes per persona × strategy:
  *    interval start in UTC and local time (with offset), place, activity, asleep (the body-clock
  *    run's sleep — prescribed or predicted — at the interval start), photopic lux
- *    and melanopic EDI in total and per source (means over the interval). Rows follow real time,
+ *    and melanopic EDI at the open eye in total and per source (means over the interval), then the
+ *    minutes of the interval spent behind closed eyelids and the mean melanopic EDI that reached
+ *    the eye (behind the eyelids while asleep; received-light.ts). Rows follow real time,
  *    so a clock change shows as a local-time jump with no lost or repeated interval.
  *  summary.csv — one row per persona × strategy with the summary metrics.
  */
@@ -12,16 +14,19 @@ import { LIGHT_SOURCES } from './eye-series.js';
 import type { RunResults } from './results-types.js';
 import type { TimelineLight } from './run-scenario.js';
 import { localIsoAt, type LocalClock } from './local-clock.js';
+import { asleepMinutes, receivedMel } from './received-light.js';
 
 export const EXPOSURE_STEP_MIN = 10;
 
 const r2 = (v: number) => Math.round(v * 100) / 100;
 
 export function exposureCsv(light: readonly TimelineLight[], clock: LocalClock): string {
-  const header = ['persona_id', 'strategy_id', 'utc', 'local_time', 'day_index', 'place', 'activity', 'asleep', 'photopic_lx', 'mel_edi_lx', ...LIGHT_SOURCES.map((s) => `mel_${s}_lx`)];
+  const header = ['persona_id', 'strategy_id', 'utc', 'local_time', 'day_index', 'place', 'activity', 'asleep', 'photopic_lx', 'mel_edi_lx', ...LIGHT_SOURCES.map((s) => `mel_${s}_lx`), 'eyes_closed_min', 'mel_edi_received_lx'];
   const rows: (string | number)[][] = [];
   for (const tl of light) {
     const { timeline, eye } = tl;
+    const closedEyes = asleepMinutes(tl.sleepEpisodes, timeline.total_min);
+    const received = receivedMel(eye.mel_edi_lx, eye.melClosed_edi_lx, closedEyes);
     let k = 0;
     for (let a = 0; a < timeline.total_min; a += EXPOSURE_STEP_MIN) {
       const b = Math.min(timeline.total_min, a + EXPOSURE_STEP_MIN);
@@ -44,6 +49,8 @@ export function exposureCsv(light: readonly TimelineLight[], clock: LocalClock):
         meanOf(eye.photopic_lx),
         meanOf(eye.mel_edi_lx),
         ...LIGHT_SOURCES.map((src) => meanOf(eye.melBySource[src])),
+        closedEyes.subarray(a, b).reduce((n, v) => n + v, 0),
+        meanOf(received),
       ]);
     }
   }

@@ -13,7 +13,7 @@ import type { Persona, Scenario } from '../schema/scenario-types.js';
 import { utcOffsetAt_min } from '../time/local-calendar.js';
 import { expandScenario } from '../timeline/expand-scenario.js';
 import { BASELINE_ID, type ExposureTimeline } from '../timeline/exposure-types.js';
-import { entrainedStart, pacemakerFor, runBodyClockFor, sleepSpecFor } from './body-clock-run.js';
+import { closedEyeLightSeries, entrainedStart, pacemakerFor, runBodyClockFor, sleepSpecFor } from './body-clock-run.js';
 import { eyeSeries, type EyeCaches, type EyeSeries } from './eye-series.js';
 import { mergedLightSeries } from './light-segments.js';
 import { localClock, localIsoAt, type LocalClock } from './local-clock.js';
@@ -129,8 +129,8 @@ export function runScenario(input: RunInput): RunOutput {
       const model = pacemakerFor(vPersona, modelId);
       const sleep = sleepSpecFor(vPersona, timeline);
       // Every strategy starts from the state entrained to the baseline's first day.
-      if (variant.id === BASELINE_ID) initial = entrainedStart(model, mergedLightSeries(eye.mel_edi_lx), sleep);
-      const bc = runBodyClockFor(model, eye.mel_edi_lx, sleep, initial, timeline.total_min);
+      if (variant.id === BASELINE_ID) initial = entrainedStart(model, mergedLightSeries(eye.mel_edi_lx), sleep, closedEyeLightSeries(eye.melClosed_edi_lx));
+      const bc = runBodyClockFor(model, eye.mel_edi_lx, sleep, initial, timeline.total_min, eye.melClosed_edi_lx);
       if (variant.id === BASELINE_ID) baselineCbt = bc.outcome.cbtmin_h;
       light.push({ personaId: persona.id, strategyId: variant.id, timeline, eye, sleepEpisodes: bc.outcome.sleepEpisodes, melatonin: { t_h: bc.run.samples.t_h, plasma_pmol_L: bc.run.samples.plasmaMelatonin_pmol_L, dim_pmol_L: bc.run.samples.dimMelatonin_pmol_L } });
       done++;

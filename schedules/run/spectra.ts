@@ -12,6 +12,7 @@
  *   daylight: CIE D-series at the sky CCT (4000–25000 K).
  */
 import { alphaOpicQuantities } from '../../model/photometry/alpha-opic.js';
+import { eyelidMelanopicTransmittance } from '../../model/photometry/eyelid-transmittance.js';
 import { uv1960ToXy } from '../../model/photometry/colorimetry.js';
 import { planckianUv } from '../../model/photometry/cct-ohno.js';
 import { lensTransmittanceRelativeTo32 } from '../../model/photometry/lens-aging.js';
@@ -28,6 +29,11 @@ export interface MelResponse {
   readonly melDer: number;
   /** Melanopic EDI of the aged (or younger) lens relative to the 32-year reference, same spectrum. */
   readonly lensFactor: number;
+  /**
+   * Melanopic EDI behind closed eyelids relative to the open eye, for this observer (lens of
+   * their age) and spectrum (model/photometry/eyelid-transmittance.ts).
+   */
+  readonly eyelidFactor: number;
 }
 
 const cache = new Map<string, MelResponse>();
@@ -40,8 +46,9 @@ function respond(key: string, age_y: number, build: () => Spectrum): MelResponse
     const ref = alphaOpicQuantities(s);
     const ev = ref.illuminance_lx;
     const mel = ref.alpha_opic.mel.edi_lx;
-    const aged = alphaOpicQuantities(applyTransmittance(s, lensTransmittanceRelativeTo32(Math.min(100, Math.max(1, age_y))))).alpha_opic.mel.edi_lx;
-    r = { melDer: ev > 0 ? mel / ev : 0, lensFactor: mel > 0 ? aged / mel : 1 };
+    const agedSpectrum = applyTransmittance(s, lensTransmittanceRelativeTo32(Math.min(100, Math.max(1, age_y))));
+    const aged = alphaOpicQuantities(agedSpectrum).alpha_opic.mel.edi_lx;
+    r = { melDer: ev > 0 ? mel / ev : 0, lensFactor: mel > 0 ? aged / mel : 1, eyelidFactor: eyelidMelanopicTransmittance(agedSpectrum) };
     if (cache.size < 4096) cache.set(k, r);
   }
   return r;
