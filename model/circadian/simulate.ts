@@ -9,7 +9,8 @@
  * output by bisection: the x minimum (root of dx/dt), the melatonin synthesis angles and, for
  * free sleep, the threshold crossings.
  * Pass 2 — plasma melatonin from the synthesis switch times (melatonin-pass.ts).
- * Pass 3 — sleep pressure and KSS on the sample grid (sleepiness-postnova.ts). Neither feeds
+ * Pass 3 — sleepiness states and the KSS of every sleepiness model on the sample grid
+ * (sleepiness-pass.ts; models in sleepiness-registry.ts). Neither feeds
  * back on the pacemaker, so the split is exact up to the passes' own discretisation.
  *
  * Times in h since t = 0 (local midnight of day 0); light in native lux after conversion.
@@ -27,7 +28,10 @@ import { createFjkCubic } from './fjk-cubic.js';
 import { createJfkX7 } from './jfk-x7.js';
 import { createPacemaker, isPacemakerId } from './registry.js';
 import { HCL_PRESETS, hclCircadianModulation, type HclParams } from './sleep-switch-hcl.js';
-import { HOMEOSTAT_SEED_NM, homeostatPass, kss, postnovaCircadianDrive } from './sleepiness-postnova.js';
+import { HOMEOSTAT_SEED_NM, postnovaCircadianDrive } from './sleepiness-postnova.js';
+import { sleepinessPass } from './sleepiness-pass.js';
+import { HEADLINE_SLEEPINESS_ID, type SleepinessModelId } from './sleepiness-registry.js';
+import { TPM_S_SEED } from './sleepiness-tpm.js';
 import { normalisedEpisodes, type SleepEpisode, type SleepSpec } from './sleep-input.js';
 
 const DEG = Math.PI / 180;
@@ -63,6 +67,8 @@ export interface SimulationOptions {
   readonly integrator?: Integrator;
   /** Spacing of stored samples (h); default 0.25. */
   readonly sampleStep_h?: number;
+  /** Sleepiness model whose KSS fills `samples.kss` (default the headline model). */
+  readonly sleepinessModel?: SleepinessModelId;
 }
 
 /** Everything needed to continue a simulation (times in h since t = 0). */
@@ -76,6 +82,10 @@ export interface SimState {
   readonly pendingSwitches: readonly SynthesisSwitch[];
   /** Postnova 2018 homeostatic sleep pressure H (nM). */
   readonly homeostat_nM: number;
+  /** Three-process model S (alertness units). */
+  readonly alertnessS: number;
+  /** Hours since the last awakening (Infinity if none known; 0 while asleep). */
+  readonly sinceWake_h: number;
 }
 
 export interface SimulationSamples {
@@ -91,8 +101,10 @@ export interface SimulationSamples {
   /** Postnova 2018 sleep pressure H (nM) and circadian drive C. */
   readonly sleepPressure_nM: number[];
   readonly circadianDrive: number[];
-  /** KSS (Postnova 2018) while awake; NaN asleep. */
+  /** KSS of the chosen sleepiness model (default the headline) while awake; NaN asleep. */
   readonly kss: number[];
+  /** KSS of every sleepiness model (sleepiness-registry.ts) while awake; NaN asleep. */
+  readonly kssByModel: Record<SleepinessModelId, number[]>;
 }
 
 export interface SimulationRun {
@@ -189,6 +201,8 @@ export function stateFromPacemaker(model: Pacemaker, pacemaker: readonly number[
     melatonin: { h1: 0, h2: 0, h1Dim: 0, h2Dim: 0, nSuppression: 0, on, since_h: -Infinity, atSwitch: on ? MEL.A_pmol_L_min : 0 },
     pendingSwitches: [],
     homeostat_nM: HOMEOSTAT_SEED_NM,
+    alertnessS: TPM_S_SEED,
+    sinceWake_h: awake ? Infinity : 0,
   };
 }
 
@@ -454,33 +468,26 @@ export function simulate(opts: SimulationOptions): SimulationRun {
     sampleStep_h: sampleStep,
   });
 
-  // Pass 3: sleep pressure and KSS on the sample grid.
+  // Pass 3: sleepiness states and KSS on the sample grid.
   const C = samples.t_h.map((_t, i) => {
     const [X, Y] = x7Equivalent(model, tools, [samples.s0[i] as number, samples.s1[i] as number]);
     return postnovaCircadianDrive(X, Y);
   });
-  const transitions = sleepEpisodes.flatMap((e) => [e.start_h, e.end_h]).sort((a, b) => a - b);
-  // sleep state at non-decreasing query times (a moving pointer over the sorted episodes)
-  const asleepScanner = () => {
-    let k = 0;
-    return (tq: number): boolean => {
-      while (k < sleepEpisodes.length && (sleepEpisodes[k] as SleepEpisode).end_h <= tq) k++;
-      const e = sleepEpisodes[k];
-      return e !== undefined && tq >= e.start_h;
-    };
-  };
-  const asleepAtHom = asleepScanner();
-  const asleepAtKss = asleepScanner();
-  const asleepAt = (tq: number) => sleepEpisodes.some((e) => tq >= e.start_h && tq < e.end_h);
-  const hom = homeostatPass(samples.t_h, C, (tq) => !asleepAtHom(tq), transitions, initial.homeostat_nM);
-  const kssValues = samples.t_h.map((tq, i) => (asleepAtKss(tq) ? Number.NaN : kss(hom.H_nM[i] as number, C[i] as number)));
-  // the last sample may lie before tEnd: finish H to tEnd
-  const lastT = samples.t_h[samples.t_h.length - 1] ?? t0;
-  let finalH = hom.final_nM;
-  if (tEnd > lastT + 1e-9) {
-    const tail = homeostatPass([lastT, tEnd], [C[C.length - 1] ?? 0.3, C[C.length - 1] ?? 0.3], (tq) => !asleepAt(tq), transitions, finalH);
-    finalH = tail.final_nM;
-  }
+  const xy = [0, 0];
+  const phase_h = samples.t_h.map((_t, i) => {
+    xy[0] = samples.s0[i] as number;
+    xy[1] = samples.s1[i] as number;
+    return (24 * cycleTimeAtAngle(tools.own, model.angle(xy))) / tools.own.period_h;
+  });
+  const sleepy = sleepinessPass({
+    t_h: samples.t_h,
+    circadianDrive: C,
+    phase_h,
+    sleepEpisodes,
+    start_h: t0,
+    end_h: tEnd,
+    initial: { homeostat_nM: initial.homeostat_nM, alertnessS: initial.alertnessS, sinceWake_h: initial.sinceWake_h },
+  });
 
   const final: SimState = {
     t_h: tEnd,
@@ -488,7 +495,9 @@ export function simulate(opts: SimulationOptions): SimulationRun {
     awake,
     melatonin: mel.final,
     pendingSwitches: switches.filter((s) => s.t_h > tEnd),
-    homeostat_nM: finalH,
+    homeostat_nM: sleepy.final.homeostat_nM,
+    alertnessS: sleepy.final.alertnessS,
+    sinceWake_h: sleepy.final.sinceWake_h,
   };
   return {
     model,
@@ -504,9 +513,10 @@ export function simulate(opts: SimulationOptions): SimulationRun {
       ...samples,
       plasmaMelatonin_pmol_L: mel.plasma_pmol_L,
       dimMelatonin_pmol_L: mel.plasmaDim_pmol_L,
-      sleepPressure_nM: hom.H_nM,
+      sleepPressure_nM: sleepy.sleepPressure_nM,
       circadianDrive: C,
-      kss: kssValues,
+      kss: sleepy.kssByModel[opts.sleepinessModel ?? HEADLINE_SLEEPINESS_ID],
+      kssByModel: sleepy.kssByModel,
     },
     final,
     rhsEvaluations: rhsEvals,

@@ -1,35 +1,63 @@
 /**
  * Sleep pressure and sleepiness (KSS) after Postnova, Lockley & Robinson 2018 (J Biol Rhythms
- * 33:203; equations and Table 1/Table 3 values as in two public re-implementations):
+ * 33:203–218), arousal-dynamics model. Equation numbers are the paper's as two independent public
+ * re-implementations label them (one records corrections supplied by the authors); the paper's
+ * full text could not be read here (its abstract was), so every value below is as those two
+ * agree, with the table or equation they cite:
  *
- *   τ_H dH/dt = ν_Hm·Q_m − H                                   homeostatic sleep pressure (nM)
- *   KSS       = Θ0 + Θ_H·H + Θ_C·C,  Θ0 = −24.34, Θ_H = 2.28 nM⁻¹, Θ_C = −1.74   (awake only)
- *   C         = 0.1·(1 + X)/2 + [(3.1X − 2.5Y + 4.2)/(3.7(X + 2))]²   circadian drive (Postnova 2016)
+ *   Eq 1  τ_v dV_v/dt = ν_vm·Q_m − V_v + D_v                 sleep-active (VLPO) group, mV
+ *   Eq 2  τ_m dV_m/dt = ν_mv·Q_v − V_m + D_m + W             wake-active (MA) group, mV
+ *   Eq 3  τ_H dH/dt   = ν_Hm·Q_m − H                         homeostatic sleep pressure, nM
+ *   Eq 7  Q(V) = Q_max / (1 + e^{(θ − V)/σ'})                 mean firing rate, s⁻¹
+ *   Eq 8  W = F_w·max(0, V_WE − ν_mv·Q_v − D_m)               wake effort, F_w = 1 in imposed wake
+ *   Eq 9  D_v = ν_vH·H + ν_vC·C + A_v                         sleep drive, mV
+ *   Eq 10 C = 0.1·(1 + X)/2 + [(3.1X − 2.5Y + 4.2)/(3.7(X + 2))]²   circadian drive (Postnova 2016)
+ *   KSS   = Θ0 + Θ_H·H + Θ_C·C   (awake only; Table 3 / Eq 23 as both ports cite them)
  *
- * Reduction (design choice, documented): the fast arousal flip-flop (τ_v = τ_m = 50 s ≪ hours)
- * is replaced by its quasi-steady state, so Q_m is an algebraic function of the sleep drive
- * D_v = ν_vH·H + ν_vC·C + A_v and of the prescribed state:
- *   V_v = ν_vm·Q(V_m) + D_v,  V_m = ν_mv·Q(V_v) + D_m + W,  Q(V) = Q_max/(1 + e^{(θ − V)/σ})
- * awake: the highest solution, with Postnova's wake effort W = max(0, V_WE − ν_mv·Q_v − D_m)
- * (so wake can be held against high pressure); asleep: the lowest solution. Q_m(D_v) is
- * tabulated once for both states. This keeps the published KSS coefficients applicable (they
- * were fitted to this H and C; feeding H from another model would void the fit).
- * X, Y are the x⁷ oscillator's (x, xc): used directly for jfk99-x7 and carried over by time since
- * CBTmin for the other pacemakers (limit-cycle.ts).
+ * Reduction (design choice, checked): τ_v = τ_m = 50 s ≪ τ_H = 59 h, so the flip-flop sits at its
+ * steady state and Q_m is an algebraic function of D_v and of the prescribed state: awake, the
+ * highest solution of Eqs 1–2 at steady state with the wake effort of Eq 8 (which makes
+ * V_m = max(ν_mv·Q_v + D_m, V_WE)); asleep, the lowest. Q_m(D_v) is tabulated once for both states.
+ * sleepiness-postnova.test.ts integrates the full fast system (Eqs 1–3, 5 s steps) through a night
+ * of imposed wake and finds the same H and KSS, so the reduction is faithful; in particular the
+ * wake effort holds Q_m at Q(V_WE) = 3.37 s⁻¹, so H approaches ν_Hm·Q(V_WE) = 15.4 nM with the
+ * 59 h time constant during sleep deprivation. That is the published model's behaviour, not the
+ * reduction's: it caps KSS after one night awake near 6.6 (model limitation, recorded in
+ * docs/validation/circadian.md).
+ *
+ * Sleep inertia (added, not in Postnova 2018): the three-process model's W term (sleepiness-tpm.ts,
+ * Åkerstedt & Folkard 1997) carried onto the KSS scale with the TPM's own alertness → KSS slope:
+ * ΔKSS = −0.6·(−5.72)·e^{−1.51 t} = 3.43·e^{−1.51 t}, t in h since waking.
+ *
+ * X, Y are the x⁷ oscillator's (x, xc): used directly for the x⁷ pacemakers and carried over by
+ * time since CBTmin for the others (limit-cycle.ts). This keeps the KSS coefficients applicable:
+ * they were fitted to this H and C; feeding H from another model would void the fit.
  */
+import { TPM, tpmInertia } from './sleepiness-tpm.js';
+
 export const POSTNOVA_2018 = {
+  /** Table 1: time constants of the sleep- and wake-active groups (s) and of H (h). */
+  tauV_s: 50,
+  tauM_s: 50,
   tauH_h: 59,
+  /** Table 1: ν_Hm, nM s. */
   nuHm_nM_s: 4.57,
+  /** Table 1 (Eq 7): Q_max (s⁻¹), θ (mV), σ' (mV). */
   Qmax_per_s: 100,
   theta_mV: 10,
   sigma_mV: 3,
+  /** Table 1: mutual inhibition ν_vm, ν_mv (mV s). */
   nuVm_mV_s: -2.1,
   nuMv_mV_s: -1.8,
+  /** Table 1: drive to the MA group D_m (mV). */
   Dm_mV: 1.3,
+  /** Table 1 (Eq 9): ν_vH (mV/nM), ν_vC (mV), A_v (mV). */
   nuVH_mV_per_nM: 1.0,
   nuVC_mV: -0.5,
   Av_mV: -10.3,
+  /** Table 1 (Eq 8): wake-effort threshold V_WE (mV). */
   VWE_mV: -0.07,
+  /** Table 3 / Eq 23: KSS intercept Θ0, homeostatic weight Θ_H (nM⁻¹), circadian weight Θ_C. */
   kss0: -24.34,
   kssH_per_nM: 2.28,
   kssC: -1.74,
@@ -112,8 +140,14 @@ export function homeostatRate_nM_per_h(H: number, C: number, awake: boolean): nu
   return (P.nuHm_nM_s * wakeActiveRate_per_s(dv, awake) - H) / P.tauH_h;
 }
 
+/** KSS of Table 3 / Eq 23 from H (nM) and C, without sleep inertia. */
 export function kss(H: number, C: number): number {
   return P.kss0 + P.kssH_per_nM * H + P.kssC * C;
+}
+
+/** Sleep inertia on the KSS scale `sinceWake_h` hours after waking (TPM W × TPM KSS slope). */
+export function postnovaInertiaKss(sinceWake_h: number): number {
+  return TPM.kssA * tpmInertia(sinceWake_h);
 }
 
 /** Largest Heun step for H (h); τ_H = 59 h, so the local error is ~(0.5/59)³ relative. */
