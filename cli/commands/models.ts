@@ -1,6 +1,7 @@
 /**
  * `zeitlight models [--json]` — the body-clock models this version can run, with their
- * parameter sets, phase-marker rules and sources.
+ * parameter sets, phase-marker rules and sources, and the sleepiness (KSS) models with the
+ * headline one marked.
  */
 import type { Command, CommandContext } from '../command.js';
 import { formatTable, HEALTH_CAUTION, printJson } from '../output.js';
@@ -10,7 +11,7 @@ import { ST_HILAIRE_MELATONIN } from '../../model/circadian/melatonin-sthilaire.
 import { MELATONIN_PROCESS_L } from '../../model/circadian/melatonin-pass.js';
 import { createPacemaker, DEFAULT_PACEMAKER_ID, PACEMAKER_IDS } from '../../model/circadian/registry.js';
 import { HCL_PRESETS } from '../../model/circadian/sleep-switch-hcl.js';
-import { POSTNOVA_2018 } from '../../model/circadian/sleepiness-postnova.js';
+import { HEADLINE_SLEEPINESS_ID, SLEEPINESS_MODEL_IDS, SLEEPINESS_MODELS } from '../../model/circadian/sleepiness-registry.js';
 
 export const modelsCommand: Command = {
   name: 'models',
@@ -37,7 +38,10 @@ export const modelsCommand: Command = {
     const doc = {
       pacemakers,
       melatonin: { id: 'sthilaire07-melatonin', source: 'St Hilaire, Gronfier, Zeitzer & Klerman 2007 J Pineal Res 43:294', parameters: ST_HILAIRE_MELATONIN, suppression_process_l: MELATONIN_PROCESS_L, suppression_definition: 'acute: 100·(1 − AUC / AUC of the same night without light suppression)' },
-      sleepiness: { id: 'postnova18-kss', source: 'Postnova, Lockley & Robinson 2018 J Biol Rhythms 33:203 (quasi-steady arousal state)', parameters: POSTNOVA_2018 },
+      sleepiness: SLEEPINESS_MODEL_IDS.map((id) => {
+        const m = SLEEPINESS_MODELS[id];
+        return { id, headline: id === HEADLINE_SLEEPINESS_ID, label: m.label, source: m.source, parameters: m.parameters };
+      }),
       free_sleep: { id: 'hcl23', source: 'Skeldon et al. 2023/24 PLoS Comput Biol (Homeostatic–Circadian–Light model, authors\' code)', presets: HCL_PRESETS },
       light_input: {
         native: 'photopic lux of cool-white fluorescent light (the models\' calibration source)',
@@ -55,7 +59,9 @@ export const modelsCommand: Command = {
       return 0;
     }
     ctx.stdout(formatTable(['id', 'period h', 'CBTmin rule', 'model'], pacemakers.map((p) => [p.id + (p.default ? ' *' : ''), p.intrinsic_period_h.toFixed(2), p.cbtmin_rule, p.label])));
-    ctx.stdout(`\n* default. Melatonin: ${doc.melatonin.source}. Sleepiness: ${doc.sleepiness.source}.\n\n${HEALTH_CAUTION}\n`);
+    ctx.stdout(`\n* default. Melatonin: ${doc.melatonin.source}.\n\n`);
+    ctx.stdout(formatTable(['sleepiness id', 'model', 'source'], doc.sleepiness.map((m) => [m.id + (m.headline ? ' *' : ''), m.label, m.source])));
+    ctx.stdout(`\n* headline (KSS in results). KSS 7 or more: sleepy.\n\n${HEALTH_CAUTION}\n`);
     return 0;
   },
 };

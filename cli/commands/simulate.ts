@@ -109,7 +109,7 @@ export const simulateCommand: Command = {
         dlmo_h: `CBTmin − ${DLMO_BEFORE_CBTMIN_H} h`,
         melatonin_suppression_pct: 'acute: 100·(1 − plasma melatonin area / area of the same person in dim light), per night from synthesis onset to the next onset; null when there is no melatonin to suppress or the run ends before the night is over (4 h after synthesis offset)',
         melatonin_pg_ml_hourly: 'plasma melatonin (St Hilaire et al. 2007) at each whole hour since t = 0, with light suppression, pg/mL',
-        kss_hourly: 'mean KSS (Postnova et al. 2018) over each hour awake since t = 0; null when asleep the whole hour; ≥ 7 is sleepy',
+        kss_hourly: 'mean KSS of the headline sleepiness model (see zeitlight models) over each hour awake since t = 0; null when asleep the whole hour; ≥ 7 is sleepy',
       },
       caution: HEALTH_CAUTION,
     };

@@ -17,7 +17,8 @@ export const MODELS: readonly ModelEntry[] = [
   { what: 'Light processing and body clock', model: 'Kronauer-family oscillator with Process L (default jfk99-x7)', reference: 'Jewett, Forger & Kronauer 1999; Kronauer, Forger & Jewett 1999, J Biol Rhythms 14', units: 'model-native photopic lux of cool-white fluorescent light; hours' },
   { what: 'Phase markers', model: 'CBTmin from the oscillator minimum; DLMO = CBTmin − 7 h', reference: 'docs/methods/circadian.md §4.4', units: 'clock hours' },
   { what: 'Melatonin and suppression', model: 'Pineal synthesis and clearance driven by the clock, suppressed by light', reference: 'St Hilaire, Gronfier, Zeitzer & Klerman 2007, J Pineal Res 43:294', units: 'pmol/L; suppression in % of the same night in dim light' },
-  { what: 'Sleep pressure and sleepiness', model: 'Sleep–wake switch with homeostatic pressure; KSS from pressure and circadian drive', reference: 'Postnova, Lockley & Robinson 2018, J Biol Rhythms 33:203', units: 'KSS 1 (extremely alert) … 9 (very sleepy)' },
+  { what: 'Sleepiness (headline)', model: 'Three-process model of alertness: sleep pressure, circadian rhythm tied to the simulated body clock, sleep inertia; converted to KSS', reference: 'Åkerstedt & Folkard 1997, Chronobiol Int 14:115; Åkerstedt, Folkard & Portin 2004; Ingre et al. 2014, PLoS ONE 9:e108679', units: 'KSS 1 (extremely alert) … 9 (very sleepy)' },
+  { what: 'Sleepiness (second model)', model: 'Sleep–wake switch with homeostatic pressure; KSS from pressure and circadian drive, plus sleep inertia', reference: 'Postnova, Lockley & Robinson 2018, J Biol Rhythms 33:203', units: 'KSS 1 … 9' },
   { what: 'Numerical solution', model: 'Adaptive extrapolation ODE solver, restarted at light changes', reference: 'Hairer & Wanner, ODEX (odex package)', units: '—' },
 ];
 
