@@ -4,35 +4,25 @@
  * (paths relative to the scenario file), run the pipeline (schedules/run) and write
  * results.json, exposure.csv and summary.csv (and report.pdf with --pdf) into the folder.
  */
-import { readFileSync } from 'node:fs';
 import { basename, dirname, resolve } from 'node:path';
 import { CliError, UsageError } from '../cli-error.js';
 import type { Command, CommandContext } from '../command.js';
 import { numberOption, positionals, stringOption } from '../args.js';
+import { readInputFile } from '../input-file.js';
 import { formatProblem, validateScenarioText, type Scenario } from '../../schedules/index.js';
 import type { RunInput } from '../../schedules/run/index.js';
 import { paperOption } from '../run-output/paper-option.js';
 import { runAndWrite } from '../run-output/run-and-write.js';
 
-function readText(file: string, what: string, field?: string): string {
-  try {
-    return readFileSync(file, 'utf8');
-  } catch (err) {
-    const code = (err as NodeJS.ErrnoException).code;
-    const why = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a folder' : (err as Error).message;
-    throw new CliError(`${field !== undefined ? `${field}: ` : ''}cannot read ${what} ${file}: ${why}`);
-  }
-}
-
 /** Weather and light-log texts the scenario refers to, read relative to the scenario file. */
 export function externalInputs(scenario: Scenario, scenarioFile: string): Pick<RunInput, 'weather' | 'lightLogTexts'> {
   const base = dirname(resolve(scenarioFile));
   const w = scenario.site.weather;
-  const weather = w.kind === 'file' ? { fileName: w.file, text: readText(resolve(base, w.file), 'the weather file', 'site.weather.file') } : undefined;
+  const weather = w.kind === 'file' ? { fileName: w.file, text: readInputFile(resolve(base, w.file), 'weather', 'site.weather.file') } : undefined;
   const used = new Set(scenario.personas.flatMap((p) => p.measuredLight.map((m) => m.log)));
   const lightLogTexts: Record<string, string> = {};
   scenario.lightLogs.forEach((l, i) => {
-    if (used.has(l.id)) lightLogTexts[l.id] = readText(resolve(base, l.file), 'the light log', `lightLogs[${i}].file`);
+    if (used.has(l.id)) lightLogTexts[l.id] = readInputFile(resolve(base, l.file), 'light-log', `lightLogs[${i}].file`);
   });
   return { ...(weather !== undefined ? { weather } : {}), lightLogTexts };
 }
@@ -93,7 +83,7 @@ export const runCommand: Command = {
     if (file === undefined) throw new UsageError('expected a scenario file');
     const outDir = outOption(ctx);
     const cohort = cohortOptions(ctx);
-    const text = readText(file, 'the scenario');
+    const text = readInputFile(file, 'scenario');
     const scenario = validatedScenario(text, file);
     const inputs = externalInputs(scenario, file);
     const chromium = stringOption(ctx, 'chromium');

@@ -4,58 +4,62 @@
  * (weather file present, measured light logs readable). Lists every problem with its path and a
  * fix. Exit 0 when there is no error (warnings allowed), 1 otherwise.
  */
-import { existsSync, readFileSync } from 'node:fs';
+import { existsSync } from 'node:fs';
 import { dirname, resolve } from 'node:path';
 import { CliError } from '../cli-error.js';
 import type { Command, CommandContext } from '../command.js';
 import { positionals } from '../args.js';
+import { readInputFile } from '../input-file.js';
 import { HEALTH_CAUTION, printJson } from '../output.js';
-import { formatProblem, importLightLog, SCENARIO_FORMAT_VERSION, validateScenarioText, type Scenario, type ScenarioProblem } from '../../schedules/index.js';
+import { formatProblem, importLightLog, SCENARIO_FORMAT_VERSION, validateScenarioText, type ScenarioProblem } from '../../schedules/index.js';
+import type { CheckableParts } from '../../schedules/validation/validate-scenario.js';
+import type { LightLogSpec } from '../../schedules/schema/scenario-types.js';
 
-function readText(file: string): string {
-  try {
-    return readFileSync(file, 'utf8');
-  } catch (err) {
-    const code = (err as NodeJS.ErrnoException).code;
-    throw new CliError(`cannot read ${file}: ${code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a folder' : ((err as Error).message ?? String(err))}`);
-  }
-}
-
-/** Problems with the files a valid scenario refers to, paths relative to the scenario file. */
-export function referencedFileProblems(scenario: Scenario, scenarioFile: string): ScenarioProblem[] {
+/**
+ * Problems with the files a scenario refers to, paths relative to the scenario file. Works on the
+ * checkable parts of a scenario that has errors too (schedules/validation CheckableParts), so the
+ * files are checked in the same pass as everything else; a file name that is itself invalid is
+ * reported by the schema and not looked for.
+ */
+export function referencedFileProblems(parts: CheckableParts, scenarioFile: string): ScenarioProblem[] {
   const out: ScenarioProblem[] = [];
+  const { scenario, lightLogIndex, replaced } = parts;
   const base = dirname(resolve(scenarioFile));
   const w = scenario.site.weather;
-  if (w.kind === 'file' && !existsSync(resolve(base, w.file))) {
+  if (w.kind === 'file' && !replaced.some((r) => r === 'site' || r.startsWith('site.weather')) && !existsSync(resolve(base, w.file))) {
     out.push({ severity: 'error', path: 'site.weather.file', message: `weather file ${w.file} not found (looked in ${base})`, fix: 'Give the path relative to the scenario file, or use the sky-condition model.' });
   }
-  scenario.lightLogs.forEach((log, i) => {
-    const path = resolve(base, log.file);
-    if (!existsSync(path)) {
-      out.push({ severity: 'error', path: `lightLogs[${i}].file`, message: `light log ${log.file} not found (looked in ${base})`, fix: 'Give the path relative to the scenario file.' });
-      return;
-    }
-    let text: string;
-    try {
-      text = readFileSync(path, 'utf8');
-    } catch (err) {
-      out.push({ severity: 'error', path: `lightLogs[${i}].file`, message: `light log ${log.file} cannot be read: ${(err as Error).message}`, fix: 'Check the file permissions.' });
-      return;
-    }
-    const r = importLightLog(text, { ...log, timeZone: log.timeZone ?? scenario.site.timeZone });
-    for (const p of r.problems) {
-      out.push({
-        severity: p.severity,
-        path: `lightLogs[${i}]`,
-        message: `${log.file}${p.line !== null ? ` line ${p.line}` : ''}${p.column !== null ? ` column "${p.column}"` : ''}: ${p.message}`,
-        fix: p.fix,
-      });
-    }
-    if (r.log !== undefined && r.log.gaps.length > 0) {
-      const total = r.log.gaps.reduce((a, g) => a + g.duration_min, 0);
-      out.push({ severity: 'warning', path: `lightLogs[${i}]`, message: `${log.file}: ${r.log.gaps.length} gap(s), ${Math.round(total)} min in all (device off or not worn)`, fix: `Gaps are filled by the "${log.fill}" rule; change "fill" if another suits better.` });
-    }
+  scenario.lightLogs.forEach((log, k) => {
+    const i = lightLogIndex[k] ?? k;
+    if (replaced.includes(`lightLogs[${i}].file`)) return;
+    out.push(...lightLogFileProblems(log, i, base, log.timeZone ?? scenario.site.timeZone));
   });
+  return out;
+}
+
+function lightLogFileProblems(log: LightLogSpec, i: number, base: string, timeZone: string): ScenarioProblem[] {
+  const out: ScenarioProblem[] = [];
+  const path = resolve(base, log.file);
+  if (!existsSync(path)) {
+    out.push({ severity: 'error', path: `lightLogs[${i}].file`, message: `light log ${log.file} not found (looked in ${base})`, fix: 'Give the path relative to the scenario file.' });
+    return out;
+  }
+  let text: string;
+  try {
+    text = readInputFile(path, 'light-log', `lightLogs[${i}].file`);
+  } catch (err) {
+    out.push({ severity: 'error', path: `lightLogs[${i}].file`, message: err instanceof Error ? err.message : String(err), fix: 'Check the file, its permissions and its size.' });
+    return out;
+  }
+  const r = importLightLog(text, { ...log, timeZone });
+  for (const p of r.problems) {
+    out.push({
+      severity: p.severity,
+      path: `lightLogs[${i}]`,
+      message: `${log.file}${p.line !== null ? ` line ${p.line}` : ''}${p.column !== null ? ` column "${p.column}"` : ''}: ${p.message}`,
+      fix: p.fix,
+    });
+  }
   return out;
 }
 
@@ -67,9 +71,9 @@ export const validateCommand: Command = {
   async run(ctx: CommandContext): Promise<number> {
     const [file] = positionals(ctx, ['scenario.json']);
     if (file === undefined) throw new CliError('expected a scenario file');
-    const text = readText(file);
+    const text = readInputFile(file, 'scenario');
     const v = validateScenarioText(text);
-    const problems = [...v.problems, ...(v.scenario !== undefined ? referencedFileProblems(v.scenario, file) : [])];
+    const problems = [...v.problems, ...(v.checkable !== undefined ? referencedFileProblems(v.checkable, file) : [])];
     const errors = problems.filter((p) => p.severity === 'error').length;
     const warnings = problems.length - errors;
     const valid = errors === 0;

@@ -44,12 +44,32 @@ describe('zeitlight validate', () => {
     expect(r.code).toBe(1);
     const doc = JSON.parse(r.out) as { valid: boolean; problems: { path: string; fix: string }[] };
     expect(doc.valid).toBe(false);
-    expect(doc.problems.map((p) => p.path)).toEqual(['run.days']);
-    expect(r.err).toMatch(/bad\.json: 1 error/);
-    // Once the schema error is fixed, the sense check finds the time zone.
-    bad.run.days = 3;
+    // The schema error in run.days does not hide the sense check of the time zone.
+    expect(doc.problems.map((p) => p.path)).toEqual(['run.days', 'site.timeZone']);
+    expect(r.err).toMatch(/bad\.json: 2 error/);
     const r2 = await run([write('bad2.json', bad)], false);
     expect(r2.out).toMatch(/error: site\.timeZone: "Mars\/Olympus" is not a known IANA time zone/);
+  });
+
+  it('lists schema errors, a misspelt template name and a missing light log together, in one pass', async () => {
+    const bad = structuredClone(DEMO_SCENARIO) as unknown as {
+      run: Record<string, unknown>;
+      personas: Record<string, unknown>[];
+      lightLogs: unknown[];
+      format?: unknown;
+    };
+    delete bad.format;
+    bad.run.days = 0;
+    const desk = bad.personas[1] as { age_y: unknown; week: Record<string, unknown>; measuredLight?: unknown[] };
+    desk.age_y = 'forty';
+    desk.week.mon = 'wrokday';
+    desk.measuredLight = [{ log: 'wear' }];
+    bad.lightLogs = [{ id: 'wear', file: 'no-such-log.csv', quantity: { kind: 'photopic-lux' } }];
+    const r = await run([write('staged.json', bad)], true);
+    expect(r.code).toBe(1);
+    const doc = JSON.parse(r.out) as { problems: { path: string; message: string; fix: string }[] };
+    expect(doc.problems.map((p) => p.path).sort()).toEqual(['format', 'lightLogs[0].file', 'personas[1].age_y', 'personas[1].week.mon', 'run.days']);
+    expect(doc.problems.find((p) => p.path === 'personas[1].week.mon')?.fix).toMatch(/Did you mean "workday"/);
   });
 
   it('checks a measured light log the scenario refers to and names the bad line', async () => {
