@@ -46,7 +46,7 @@ export const modelsCommand: Command = {
       light_input: {
         native: 'photopic lux of cool-white fluorescent light (the models\' calibration source)',
         melanopic: `melanopic EDI is divided by the melanopic DER of CIE ${CALIBRATION_ILLUMINANT} = ${calibrationMelanopicDer().toFixed(4)}`,
-        sleep_gating: 'no light reaches the eye during sleep (eyelid transmission 0)',
+        sleep_gating: 'asleep, the models read the light behind the closed eyelids (adult closed-eyelid spectral transmittance, Ando & Kripke 1996 and Robinson et al. 1991; for a bare light series 0.30 % of the melanopic EDI, the value for the calibration source CIE FL2)',
       },
       person_parameters: {
         tau_h: 'intrinsic (free-running) period in darkness, h',

@@ -9,7 +9,7 @@
  * the model's own period and light sensitivity set its timing.
  * Light at the eye is not recomputed: minutes left by the moved sleep keep the light of the
  * written routine at that minute (usually the bedroom, lights off), and minutes newly asleep are
- * gated by the eyelid in the body-clock models (model/circadian sleep-input).
+ * read behind the closed eyelids by the body-clock models (model/circadian eyes-closed-light).
  */
 import { normalisedEpisodes, type SleepEpisode, type SleepSpec } from '../../model/circadian/sleep-input.js';
 import type { ExposureTimeline } from '../timeline/exposure-types.js';
