@@ -12,6 +12,7 @@ import type { PacemakerId } from '../../model/circadian/registry.js';
 import { DEFAULT_PACEMAKER_ID } from '../../model/circadian/registry.js';
 import type { SleepSpec } from '../../model/circadian/sleep-input.js';
 import type { SimState } from '../../model/circadian/simulate.js';
+import { HEADLINE_SLEEPINESS_ID, type SleepinessModelId } from '../../model/circadian/sleepiness-registry.js';
 import type { Persona } from '../schema/scenario-types.js';
 import type { ExposureTimeline } from '../timeline/exposure-types.js';
 import { closedEyeLightSeries, entrainedStart, pacemakerFor, runBodyClockFor, sleepSpecFor } from './body-clock-run.js';
@@ -22,7 +23,8 @@ import type { LocalClock } from './local-clock.js';
 import { strategyMetrics } from './metrics.js';
 import type { StrategySummary } from './results-types.js';
 import { RunInputError } from './run-input-error.js';
-import { runScenario, type RunInput } from './run-scenario.js';
+import { outcomeWithSleepiness } from './sleepiness-outcome.js';
+import { runScenario, type RunInput, type RunOutput } from './run-scenario.js';
 
 interface PreparedStrategy {
   readonly id: string;
@@ -59,21 +61,37 @@ export function prepareCohortPersona(input: RunInput, personaId: string, age_y?:
   const { onProgress: _drop, ...rest } = input;
   void _drop;
   const out = runScenario({ ...rest, scenario, personaIds: [personaId] });
-  const result = out.results.personas[0];
-  if (result === undefined) throw new RunInputError('personas', `persona "${personaId}" has no baseline to compare with`);
+  return cohortPersonaFromRun(out, persona, input.modelId ?? DEFAULT_PACEMAKER_ID);
+}
+
+/**
+ * A persona's strategies prepared from a finished run (its light at the eye, reused), for runs of
+ * the body-clock models under `modelId` (cohort occupants; the model ensemble, ensemble.ts).
+ */
+export function cohortPersonaFromRun(out: RunOutput, persona: Persona, modelId: PacemakerId): CohortPersonaBase {
+  const result = out.results.personas.find((p) => p.id === persona.id);
+  if (result === undefined) throw new RunInputError('personas', `persona "${persona.id}" has no baseline to compare with`);
   const strategies = result.strategies.map((s) => {
-    const light = out.light.find((l) => l.personaId === personaId && l.strategyId === s.id);
+    const light = out.light.find((l) => l.personaId === persona.id && l.strategyId === s.id);
     if (light === undefined) throw new RunInputError('strategies', `no light series for strategy "${s.id}"`);
     return { id: s.id, name: s.name, changes: s.changes, isBaseline: s.is_baseline, timeline: light.timeline, eye: light.eye, sleep: sleepSpecFor(persona, light.timeline), fixedAwake: fixedAwakeMinutes(light.timeline) };
   });
-  return { persona, modelId: input.modelId ?? DEFAULT_PACEMAKER_ID, clock: out.clock, strategies };
+  return { persona, modelId, clock: out.clock, strategies };
 }
 
 /** Strategy summaries (as in results.json) of one occupant, by strategy id. */
 export function runCohortOccupant(base: CohortPersonaBase, person: CohortPerson): Record<string, StrategySummary> {
+  return occupantSummaries(base, person, [HEADLINE_SLEEPINESS_ID]).get(HEADLINE_SLEEPINESS_ID) ?? {};
+}
+
+/**
+ * An occupant's strategy summaries under each of the named sleepiness models, by model and strategy
+ * id: one body-clock run per strategy, which every sleepiness model reads (sleepiness-outcome.ts).
+ */
+export function occupantSummaries(base: CohortPersonaBase, person: CohortPerson, sleepiness: readonly SleepinessModelId[]): Map<SleepinessModelId, Record<string, StrategySummary>> {
   const persona: Persona = { ...base.persona, intrinsicPeriod_h: person.intrinsicPeriod_h, lightSensitivity: person.lightSensitivity };
   const model = pacemakerFor(persona, base.modelId);
-  const out: Record<string, StrategySummary> = {};
+  const out = new Map<SleepinessModelId, Record<string, StrategySummary>>(sleepiness.map((id) => [id, {}]));
   let initial: SimState | undefined;
   let baselineCbt: number[] | undefined;
   for (const s of base.strategies) {
@@ -81,8 +99,11 @@ export function runCohortOccupant(base: CohortPersonaBase, person: CohortPerson)
     if (s.isBaseline) initial = entrainedStart(model, mergedLightSeries(s.eye.mel_edi_lx), sleep, closedEyeLightSeries(s.eye.melClosed_edi_lx));
     const bc = runBodyClockFor(model, s.eye.mel_edi_lx, sleep, initial, s.timeline.total_min, s.eye.melClosed_edi_lx);
     if (s.isBaseline) baselineCbt = bc.outcome.cbtmin_h;
-    const m = strategyMetrics({ id: s.id, name: s.name, changes: s.changes, timeline: s.timeline, clock: base.clock, eye: s.eye, clockOutcome: bc.outcome, rhsEvaluations: bc.run.rhsEvaluations, baselineCbtmin_h: s.isBaseline ? undefined : baselineCbt });
-    out[s.id] = m.summary;
+    for (const id of sleepiness) {
+      const m = strategyMetrics({ id: s.id, name: s.name, changes: s.changes, timeline: s.timeline, clock: base.clock, eye: s.eye, clockOutcome: outcomeWithSleepiness(bc.outcome, bc.run, id), rhsEvaluations: bc.run.rhsEvaluations, baselineCbtmin_h: s.isBaseline ? undefined : baselineCbt });
+      const byStrategy = out.get(id);
+      if (byStrategy !== undefined) byStrategy[s.id] = m.summary;
+    }
   }
   return out;
 }

@@ -7,11 +7,13 @@
  *    minutes of the interval spent behind closed eyelids and the mean melanopic EDI that reached
  *    the eye (behind the eyelids while asleep; received-light.ts). Rows follow real time,
  *    so a clock change shows as a local-time jump with no lost or repeated interval.
- *  summary.csv — one row per persona × strategy with the summary metrics.
+ *  summary.csv — one row per persona × strategy with the summary metrics; beside each figure that
+ *    has an ensemble range, its lowest and highest value across the models and the model count
+ *    (empty without the ensemble).
  */
 import Papa from 'papaparse';
 import { LIGHT_SOURCES } from './eye-series.js';
-import type { RunResults } from './results-types.js';
+import { ENSEMBLE_METRICS, type EnsembleMetric, type RunResults, type StrategySummary } from './results-types.js';
 import type { TimelineLight } from './run-scenario.js';
 import { localIsoAt, type LocalClock } from './local-clock.js';
 import { asleepMinutes, receivedMel } from './received-light.js';
@@ -57,21 +59,25 @@ export function exposureCsv(light: readonly TimelineLight[], clock: LocalClock):
   return Papa.unparse({ fields: header, data: rows }, { newline: '\n' }) + '\n';
 }
 
+/** Summary columns in order; each ensemble figure is followed by its range across the models (ensemble.ts). */
+const SUMMARY_FIELDS = [
+  'mean_mel_dose_lx_h', 'mean_daytime_hours_ge_250_lx', 'mean_pre_sleep_mel_edi_lx', 'nights_pre_sleep_meeting_10_lx', 'nights_sleep_meeting_1_lx', 'nights_assessed',
+  'mean_phase_shift_h', 'mean_phase_angle_dlmo_to_sleep_h', 'mean_melatonin_suppression_pct', 'work_hours', 'work_hours_kss_ge_7_share', 'mean_sleep_duration_h',
+] as const satisfies readonly (keyof StrategySummary)[];
+
+const isEnsembleMetric = (f: string): f is EnsembleMetric => (ENSEMBLE_METRICS as readonly string[]).includes(f);
+
 export function summaryCsv(results: RunResults): string {
-  const header = [
-    'persona_id', 'strategy_id', 'strategy_name', 'recommended', 'mean_mel_dose_lx_h', 'mean_daytime_hours_ge_250_lx', 'mean_pre_sleep_mel_edi_lx',
-    'nights_pre_sleep_meeting_10_lx', 'nights_sleep_meeting_1_lx', 'nights_assessed', 'mean_phase_shift_h', 'mean_phase_angle_dlmo_to_sleep_h',
-    'mean_melatonin_suppression_pct', 'work_hours', 'work_hours_kss_ge_7_share', 'mean_sleep_duration_h',
-  ];
+  const header = ['persona_id', 'strategy_id', 'strategy_name', 'recommended', ...SUMMARY_FIELDS.flatMap((f) => (isEnsembleMetric(f) ? [f, `${f}_ensemble_min`, `${f}_ensemble_max`, `${f}_ensemble_models`] : [f]))];
   const rows: (string | number | null)[][] = [];
   for (const p of results.personas) {
     for (const s of p.strategies) {
-      const m = s.summary;
-      rows.push([
-        p.id, s.id, s.name, p.recommendation.strategy_id === s.id ? 1 : 0, m.mean_mel_dose_lx_h, m.mean_daytime_hours_ge_250_lx, m.mean_pre_sleep_mel_edi_lx,
-        m.nights_pre_sleep_meeting_10_lx, m.nights_sleep_meeting_1_lx, m.nights_assessed, m.mean_phase_shift_h, m.mean_phase_angle_dlmo_to_sleep_h,
-        m.mean_melatonin_suppression_pct, m.work_hours, m.work_hours_kss_ge_7_share, m.mean_sleep_duration_h,
-      ].map((v) => (v === null ? '' : v)));
+      const cells = SUMMARY_FIELDS.flatMap((f) => {
+        if (!isEnsembleMetric(f)) return [s.summary[f]];
+        const e = s.ensemble?.[f];
+        return [s.summary[f], e?.min ?? null, e?.max ?? null, e === undefined ? null : e.model_count];
+      });
+      rows.push([p.id, s.id, s.name, p.recommendation.strategy_id === s.id ? 1 : 0, ...cells].map((v) => (v === null ? '' : v)));
     }
   }
   return Papa.unparse({ fields: header, data: rows }, { newline: '\n' }) + '\n';

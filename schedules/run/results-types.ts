@@ -17,6 +17,62 @@ export interface Headline {
   readonly value: number | null;
   readonly baseline: number | null;
   readonly sentence: string;
+  /** The same figure under every model of the ensemble (absent when the ensemble was not run). */
+  readonly ensemble?: EnsembleRange;
+}
+
+/**
+ * Summary fields that carry an ensemble range: the headlines (phase shift, melatonin suppression,
+ * share of work hours at KSS ≥ 7) and the sleep-timing figures (DLMO to sleep onset, main sleep).
+ */
+export const ENSEMBLE_METRICS = ['mean_phase_shift_h', 'mean_melatonin_suppression_pct', 'work_hours_kss_ge_7_share', 'mean_phase_angle_dlmo_to_sleep_h', 'mean_sleep_duration_h'] as const;
+export type EnsembleMetric = (typeof ENSEMBLE_METRICS)[number];
+
+/** One model's value of a figure. `sleepiness` is null where the figure does not depend on the sleepiness model. */
+export interface EnsembleValue {
+  readonly pacemaker: string;
+  readonly sleepiness: string | null;
+  readonly value: number | null;
+}
+
+/** A figure across the ensemble: the default model's value, the lowest and highest, and every model's value. */
+export interface EnsembleRange {
+  readonly default: number | null;
+  /** null when no model gave a value. */
+  readonly min: number | null;
+  readonly max: number | null;
+  /** Models that gave a value. */
+  readonly model_count: number;
+  /** The default model first. */
+  readonly models: readonly EnsembleValue[];
+}
+
+export type StrategyEnsemble = Readonly<Record<EnsembleMetric, EnsembleRange>>;
+
+/** A strategy's rank among the persona's strategies (baseline included) under each model. */
+export interface EnsembleRank {
+  readonly strategy_id: string;
+  readonly default_rank: number;
+  readonly ranks: readonly { readonly pacemaker: string; readonly sleepiness: string; readonly rank: number }[];
+  /** How the rank changes across models, in words; null when every model gives the same rank. */
+  readonly sentence: string | null;
+}
+
+export interface EnsembleRanking {
+  readonly rule: string;
+  readonly strategies: readonly EnsembleRank[];
+}
+
+/** The models of the ensemble, named and cited. */
+export interface RunEnsembleModels {
+  /** The run's own pair (its values are the summary's). */
+  readonly default: { readonly pacemaker: string; readonly sleepiness: string };
+  /** Every pair of body-clock and sleepiness model run, the default first. */
+  readonly members: readonly { readonly pacemaker: string; readonly sleepiness: string; readonly name: string }[];
+  /** Each model once with its citation: the body-clock models, then the sleepiness models, the defaults first. */
+  readonly models: readonly { readonly role: 'body clock' | 'sleepiness'; readonly id: string; readonly name: string; readonly source: string }[];
+  readonly metrics: readonly EnsembleMetric[];
+  readonly note: string;
 }
 
 export interface DayMetrics {
@@ -84,6 +140,8 @@ export interface StrategyResult {
   readonly sleep_episodes: readonly { readonly start: EventTime; readonly end: EventTime; readonly duration_h: number }[];
   readonly melatonin_nights: readonly { readonly onset: EventTime; readonly end_h: number; readonly suppression_pct: number | null }[];
   readonly solver: { readonly light_segments: number; readonly rhs_evaluations: number };
+  /** Ranges of the headline and sleep-timing figures across the model ensemble (absent without it). */
+  readonly ensemble?: StrategyEnsemble;
 }
 
 export interface Recommendation {
@@ -100,6 +158,8 @@ export interface PersonaResult {
   readonly sleep_mode: 'habitual' | 'free';
   readonly strategies: readonly StrategyResult[];
   readonly recommendation: Recommendation;
+  /** Strategy ranks under each model of the ensemble (absent without it). */
+  readonly ensemble_ranking?: EnsembleRanking;
 }
 
 export interface RunResults {
@@ -134,6 +194,8 @@ export interface RunResults {
   readonly warnings: readonly string[];
   /** Present when a cohort was run (`zeitlight run --cohort n --seed s`). */
   readonly cohort?: CohortResults;
+  /** Present when the model ensemble was run (the default of `zeitlight run`; off with --no-ensemble). */
+  readonly ensemble?: RunEnsembleModels;
 }
 
 export interface CohortResults {

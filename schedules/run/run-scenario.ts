@@ -52,6 +52,8 @@ export interface TimelineLight {
   readonly strategyId: string;
   readonly timeline: ExposureTimeline;
   readonly eye: EyeSeries;
+  /** The persona as the body-clock models saw it under this strategy. */
+  readonly persona: Persona;
   /** Sleep episodes the body-clock run used or predicted (h since the run start). */
   readonly sleepEpisodes: readonly { readonly start_h: number; readonly end_h: number }[];
   /** Modelled plasma melatonin (pmol/L) with light and in dim light, at the body-clock samples (h). */
@@ -133,7 +135,7 @@ export function runScenario(input: RunInput): RunOutput {
       if (variant.id === BASELINE_ID) initial = entrainedStart(model, mergedLightSeries(eye.mel_edi_lx), sleep, closedEyeLightSeries(eye.melClosed_edi_lx));
       const bc = runBodyClockFor(model, eye.mel_edi_lx, sleep, initial, timeline.total_min, eye.melClosed_edi_lx);
       if (variant.id === BASELINE_ID) baselineCbt = bc.outcome.cbtmin_h;
-      light.push({ personaId: persona.id, strategyId: variant.id, timeline, eye, sleepEpisodes: bc.outcome.sleepEpisodes, melatonin: { t_h: bc.run.samples.t_h, plasma_pmol_L: bc.run.samples.plasmaMelatonin_pmol_L, dim_pmol_L: bc.run.samples.dimMelatonin_pmol_L } });
+      light.push({ personaId: persona.id, strategyId: variant.id, timeline, eye, persona: vPersona, sleepEpisodes: bc.outcome.sleepEpisodes, melatonin: { t_h: bc.run.samples.t_h, plasma_pmol_L: bc.run.samples.plasmaMelatonin_pmol_L, dim_pmol_L: bc.run.samples.dimMelatonin_pmol_L } });
       done++;
       input.onProgress?.(done / jobs, `${persona.name}: ${variant.name}`);
       runs.push(
