@@ -1,7 +1,8 @@
 /**
- * `zeitlight run <scenario.json> --out <dir> [--json] [--force] [--pdf] [--chromium <path>]`
+ * `zeitlight run <scenario.json> --out <dir> [--json] [--force] [--no-ensemble] [--pdf] [--chromium <path>]`
  * — the whole job: validate the scenario, read the weather file and light logs it names
- * (paths relative to the scenario file), run the pipeline (schedules/run) and write
+ * (paths relative to the scenario file), run the pipeline (schedules/run) with the model
+ * ensemble (ranges beside every headline; --no-ensemble runs the default model only) and write
  * results.json, exposure.csv and summary.csv (and report.pdf with --pdf) into the folder.
  */
 import { basename, dirname, resolve } from 'node:path';
@@ -66,7 +67,7 @@ function cohortOptions(ctx: CommandContext): { size: number; seed: number; worke
 export const runCommand: Command = {
   name: 'run',
   summary: 'Run a scenario and write results',
-  usage: '<scenario.json> --out <dir> [--force] [--pdf [--paper A4|Letter] [--chromium <path>]] [--cohort <n> --seed <s> [--workers <n>] [--until-stable]] [--json]',
+  usage: '<scenario.json> --out <dir> [--force] [--no-ensemble] [--pdf [--paper A4|Letter] [--chromium <path>]] [--cohort <n> --seed <s> [--workers <n>] [--until-stable]] [--json]',
   options: {
     out: { type: 'string' },
     force: { type: 'boolean' },
@@ -77,6 +78,7 @@ export const runCommand: Command = {
     seed: { type: 'string' },
     workers: { type: 'string' },
     'until-stable': { type: 'boolean' },
+    'no-ensemble': { type: 'boolean' },
   },
   async run(ctx: CommandContext): Promise<number> {
     const [file] = positionals(ctx, ['scenario.json']);
@@ -91,6 +93,7 @@ export const runCommand: Command = {
       input: { scenario, ...inputs },
       outDir,
       force: ctx.values['force'] === true,
+      ensemble: ctx.values['no-ensemble'] !== true,
       pdf: ctx.values['pdf'] === true,
       paper: paperOption(ctx),
       ...(chromium !== undefined ? { chromiumPath: chromium } : {}),
