@@ -41,8 +41,8 @@ describe('light log import', () => {
     const r = importLightLog(csv(rows), { ...LUX, wornColumn: 'worn' });
     expect(r.ok).toBe(true);
     expect(r.log?.gaps).toEqual([
-      { start_ms: Date.UTC(2026, 2, 24, 10, 20), end_ms: Date.UTC(2026, 2, 24, 10, 40), duration_min: 20, reason: 'no-data' },
-      { start_ms: Date.UTC(2026, 2, 24, 10, 50), end_ms: Date.UTC(2026, 2, 24, 10, 55), duration_min: 5, reason: 'not-worn' },
+      { start_ms: Date.UTC(2026, 2, 24, 10, 20), end_ms: Date.UTC(2026, 2, 24, 10, 40), duration_min: 20, reason: 'no-data', line: 21 },
+      { start_ms: Date.UTC(2026, 2, 24, 10, 50), end_ms: Date.UTC(2026, 2, 24, 10, 55), duration_min: 5, reason: 'not-worn', line: 32 },
     ]);
   });
 
@@ -53,11 +53,36 @@ describe('light log import', () => {
     expect(r.problems).toEqual([expect.objectContaining({ line: 3, column: 'lux', severity: 'warning' })]);
   });
 
+  it('with timestampFormat "auto", skips one unreadable timestamp and lists its line, like the explicit formats', () => {
+    const rows = ['time;lux', '24/03/2026 10:00:00;5', '24/03/2026 10:01:00;6', 'n/a;7', '24/03/2026 10:03:00;8', '24/03/2026 10:04:00;9'];
+    const auto = importLightLog(rows.join('\n'), LUX);
+    const explicit = importLightLog(rows.join('\n'), { ...LUX, timestampFormat: 'dmy' });
+    expect(auto.ok).toBe(true);
+    expect(auto.log?.timestampFormat).toBe('dmy');
+    expect(auto.log?.samples.map((x) => x.photopic_lx)).toEqual(explicit.log?.samples.map((x) => x.photopic_lx));
+    expect(auto.problems.filter((p) => p.line !== null)).toEqual([expect.objectContaining({ line: 4, column: 'time', severity: 'warning' })]);
+  });
+
   it('refuses a file without the needed column and lists the columns it has', () => {
     const r = importLightLog('time,temperature\n2026-03-24T10:00Z,21\n', LUX);
     expect(r.ok).toBe(false);
     expect(r.problems[0]?.fix).toContain('temperature');
   });
+});
+
+describe('gaps in a light log are reported with their start, end and fill rule', () => {
+  const rows: (string | number)[][] = [['time', 'lux']];
+  for (let i = 0; i < 60; i++) if (i < 20 || i >= 40) rows.push([`2026-03-24T10:${String(i).padStart(2, '0')}:00Z`, 50]);
+  for (const fill of ['model', 'dark', 'hold', 'linear'] as const) {
+    it(`names the gap and the "${fill}" rule`, () => {
+      const r = importLightLog(csv(rows), { ...LUX, fill, timeZone: 'UTC' });
+      const gapNotes = r.problems.filter((p) => /gap/.test(p.message));
+      expect(gapNotes).toHaveLength(1);
+      expect(gapNotes[0]).toMatchObject({ severity: 'warning', line: 21 });
+      expect(gapNotes[0]?.message).toMatch(/2026-03-24 10:20.*2026-03-24 10:40.*20 min/);
+      expect(gapNotes[0]?.message).toContain(`"${fill}"`);
+    });
+  }
 });
 
 describe('measured light on the minute grid', () => {

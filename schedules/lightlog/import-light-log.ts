@@ -9,6 +9,7 @@
 import Papa from 'papaparse';
 import type { FillRule, TimestampFormat } from '../schema/light-log-schema.js';
 import type { LightLogSpec } from '../schema/scenario-types.js';
+import { describeGap } from './gap-notes.js';
 import { detectTimestampFormat, parseTimestamp } from './timestamp.js';
 
 export interface LogSample {
@@ -22,6 +23,8 @@ export interface LogGap {
   readonly end_ms: number;
   readonly duration_min: number;
   readonly reason: 'no-data' | 'not-worn';
+  /** 1-based line of the reading the gap follows (for a not-worn stretch, its first line). */
+  readonly line: number;
 }
 
 export interface LogProblem {
@@ -206,27 +209,31 @@ export function importLightLog(text: string, options: LightLogOptions): LightLog
 
   const gaps: LogGap[] = [];
   const samples: LogSample[] = [];
-  let notWornStart: number | undefined;
+  let notWorn: { start_ms: number; line: number } | undefined;
   for (let i = 0; i < unique.length; i++) {
     const s = unique[i];
     if (s === undefined) continue;
     if (!s.worn) {
-      notWornStart ??= s.utc_ms;
+      notWorn ??= { start_ms: s.utc_ms, line: s.line };
     } else {
-      if (notWornStart !== undefined) {
-        gaps.push({ start_ms: notWornStart, end_ms: s.utc_ms, duration_min: (s.utc_ms - notWornStart) / 60_000, reason: 'not-worn' });
-        notWornStart = undefined;
+      if (notWorn !== undefined) {
+        gaps.push({ start_ms: notWorn.start_ms, end_ms: s.utc_ms, duration_min: (s.utc_ms - notWorn.start_ms) / 60_000, reason: 'not-worn', line: notWorn.line });
+        notWorn = undefined;
       }
       samples.push({ utc_ms: s.utc_ms, photopic_lx: s.photopic_lx, melanopicEdi_lx: s.melanopicEdi_lx });
     }
     const next = unique[i + 1];
     if (next !== undefined && next.utc_ms - s.utc_ms > maxGap_ms && s.worn) {
-      gaps.push({ start_ms: s.utc_ms + interval_ms, end_ms: next.utc_ms, duration_min: (next.utc_ms - s.utc_ms - interval_ms) / 60_000, reason: 'no-data' });
+      gaps.push({ start_ms: s.utc_ms + interval_ms, end_ms: next.utc_ms, duration_min: (next.utc_ms - s.utc_ms - interval_ms) / 60_000, reason: 'no-data', line: s.line });
     }
   }
   const last = unique[unique.length - 1];
-  if (notWornStart !== undefined && last !== undefined) gaps.push({ start_ms: notWornStart, end_ms: last.utc_ms + interval_ms, duration_min: (last.utc_ms + interval_ms - notWornStart) / 60_000, reason: 'not-worn' });
+  if (notWorn !== undefined && last !== undefined) gaps.push({ start_ms: notWorn.start_ms, end_ms: last.utc_ms + interval_ms, duration_min: (last.utc_ms + interval_ms - notWorn.start_ms) / 60_000, reason: 'not-worn', line: notWorn.line });
   if (samples.length === 0) return fail(problems, 'the logger was never marked as worn', 'Check the worn column, or leave "wornColumn" out.');
+  // Every gap is reported with its start, end and how the run fills it.
+  for (const g of gaps) {
+    problems.push({ severity: 'warning', line: g.line, column: null, message: describeGap(g, options.fill, options.timeZone), fix: 'Check the logger for that time, or choose another "fill" rule for the log (model, dark, hold or linear).' });
+  }
   const first = samples[0];
   return {
     ok: true,

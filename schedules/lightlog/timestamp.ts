@@ -81,21 +81,31 @@ export interface DetectedFormat {
   readonly note: string | undefined;
 }
 
-/** Guesses the format from a sample of timestamp texts. */
+const EPOCH = /^\d+(\.\d+)?$/;
+const ISO = /^\d{4}-\d{2}-\d{2}([T ]\d{2}:\d{2}(:\d{2}([.,]\d+)?)?)?\s*(Z|[+-]\d{2}(:?\d{2})?)?$/;
+
+/**
+ * Guesses the format from a sample of timestamp texts: the form (epoch number, ISO 8601, or a
+ * date-time with "/", "." or "-") that most of them are written in, provided more than half are;
+ * texts in no known form do not decide anything (their rows are skipped and listed later, as with
+ * an explicit format).
+ */
 export function detectTimestampFormat(samples: readonly string[]): DetectedFormat {
   const texts = samples.map((s) => s.trim()).filter((s) => s !== '');
   if (texts.length === 0) return { format: undefined, note: 'no timestamps to look at' };
-  if (texts.every((t) => /^\d+(\.\d+)?$/.test(t))) {
-    const v = Number(texts[0]);
-    return { format: v > 1e11 ? 'epoch-ms' : 'epoch-s', note: undefined };
+  const epoch = texts.filter((t) => EPOCH.test(t));
+  const iso = texts.filter((t) => ISO.test(t));
+  const parts = texts.map(splitDateTime).filter((p): p is Parts => p !== undefined);
+  const best = Math.max(epoch.length, iso.length, parts.length);
+  if (2 * best <= texts.length) {
+    const unknown = texts.find((t) => !EPOCH.test(t) && !ISO.test(t) && splitDateTime(t) === undefined);
+    return { format: undefined, note: unknown !== undefined ? `"${unknown.slice(0, 40)}" is not a date-time form we know` : 'the timestamps are written in several different forms' };
   }
-  if (texts.every((t) => /^\d{4}-\d{2}-\d{2}([T ]\d{2}:\d{2}(:\d{2}([.,]\d+)?)?)?\s*(Z|[+-]\d{2}(:?\d{2})?)?$/.test(t))) return { format: 'iso', note: undefined };
-  const parts = texts.map(splitDateTime);
-  if (parts.some((p) => p === undefined)) return { format: undefined, note: `"${texts[parts.findIndex((p) => p === undefined)]}" is not a date-time form we know` };
-  const ok = parts.filter((p): p is Parts => p !== undefined);
-  if (ok.every((p) => p.a > 31)) return { format: 'ymd', note: undefined };
-  const firstOver12 = ok.some((p) => p.a > 12);
-  const secondOver12 = ok.some((p) => p.b > 12);
+  if (epoch.length === best) return { format: Number(epoch[0]) > 1e11 ? 'epoch-ms' : 'epoch-s', note: undefined };
+  if (iso.length === best) return { format: 'iso', note: undefined };
+  if (parts.every((p) => p.a > 31)) return { format: 'ymd', note: undefined };
+  const firstOver12 = parts.some((p) => p.a > 12);
+  const secondOver12 = parts.some((p) => p.b > 12);
   if (firstOver12 && !secondOver12) return { format: 'dmy', note: undefined };
   if (secondOver12 && !firstOver12) return { format: 'mdy', note: undefined };
   if (!firstOver12 && !secondOver12) return { format: 'dmy', note: 'every day number is 12 or less, so day-first was assumed' };
