@@ -3,6 +3,7 @@ import type { ReactNode } from 'react';
 import type { ResultsView } from '../results/view-model.js';
 import type { ResultsState } from '../state/workspace-store.js';
 import { RESULTS_CAUTIONS } from '../results/cautions.js';
+import { RUN_CAUTION } from '../../../schedules/run/index.js';
 import { formatDayLabel } from '../charts/clock.js';
 
 export interface ResultsSelection {
@@ -17,6 +18,29 @@ export function Cautions() {
       <ul>
         {RESULTS_CAUTIONS.map((c) => (
           <li key={c}>{c}</li>
+        ))}
+      </ul>
+    </aside>
+  );
+}
+
+/**
+ * Notes from the run (for example the gaps in a measured light log and how they were filled):
+ * the results' warnings, which the view carries after the run's caution.
+ */
+export function runNotes(view: ResultsView): string[] {
+  return view.cautions.filter((c) => c !== RUN_CAUTION && !RESULTS_CAUTIONS.includes(c));
+}
+
+export function RunNotes({ view }: { view: ResultsView }) {
+  const notes = runNotes(view);
+  if (notes.length === 0) return null;
+  return (
+    <aside className="cautions run-notes" aria-label="Notes from the run">
+      <strong>Notes from the run.</strong>
+      <ul>
+        {notes.map((n) => (
+          <li key={n}>{n}</li>
         ))}
       </ul>
     </aside>
@@ -54,6 +78,7 @@ export function ResultsFrame({
         </p>
       )}
       <Cautions />
+      {view !== null && <RunNotes view={view} />}
       {view !== null && (
         <div className="results-controls">
           <label>
