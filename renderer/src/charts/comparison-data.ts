@@ -1,6 +1,6 @@
 // The comparison table: each metric for the baseline and every strategy, the difference
 // versus baseline, and a one-line plain reading of that difference.
-import type { MetricValue, NamedItem, RunView } from '../results/view-model.js';
+import type { MetricEnsemble, MetricValue, NamedItem, RunView } from '../results/view-model.js';
 
 export interface ComparisonCell {
   readonly strategyId: string;
@@ -9,6 +9,8 @@ export interface ComparisonCell {
   readonly difference: number | null;
   readonly verdict: 'better' | 'worse' | 'same' | 'neutral' | 'unknown';
   readonly reading: string;
+  /** The value's range across the model ensemble, once it has run. */
+  readonly ensemble?: MetricEnsemble;
 }
 
 export interface ComparisonRow {
@@ -46,11 +48,22 @@ export function comparisonRows(runs: readonly RunView[], strategies: readonly Na
     decimals: metric.decimals,
     cells: strategies.map((strategy): ComparisonCell => {
       const run = runs.find((r) => r.strategyId === strategy.id);
-      const value = run?.metrics.find((m) => m.id === metric.id)?.value ?? null;
-      if (strategy.id === baselineId) return { strategyId: strategy.id, value, difference: null, verdict: 'neutral', reading: 'Baseline.' };
-      if (value === null || metric.value === null) return { strategyId: strategy.id, value, difference: null, verdict: 'unknown', reading: `${metric.label}: not available.` };
+      const own = run?.metrics.find((m) => m.id === metric.id);
+      const value = own?.value ?? null;
+      const ensemble = own?.ensemble === undefined ? {} : { ensemble: own.ensemble };
+      if (strategy.id === baselineId) return { strategyId: strategy.id, value, difference: null, verdict: 'neutral', reading: 'Baseline.', ...ensemble };
+      if (value === null || metric.value === null) return { strategyId: strategy.id, value, difference: null, verdict: 'unknown', reading: `${metric.label}: not available.`, ...ensemble };
       const difference = value - metric.value;
-      return { strategyId: strategy.id, value, difference, ...readingFor(metric, difference, strategy.name) };
+      return { strategyId: strategy.id, value, difference, ...readingFor(metric, difference, strategy.name), ...ensemble };
     }),
   }));
+}
+
+/** "0.30–0.55 across 3 models" ("-0.55 to -0.30 …" with negative values), or "same with all 3 models" when they agree at the shown decimals. */
+export function ensembleRangeText(ensemble: MetricEnsemble, decimals: number): string {
+  const lo = formatNumber(ensemble.min, decimals);
+  const hi = formatNumber(ensemble.max, decimals);
+  if (lo === hi) return `same with all ${ensemble.models} models`;
+  // an en dash between two negative numbers reads as a minus sign
+  return `${lo}${ensemble.min < 0 ? ' to ' : '–'}${hi} across ${ensemble.models} models`;
 }

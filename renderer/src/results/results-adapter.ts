@@ -4,9 +4,10 @@
 import type { Scenario } from '../../../schedules/schema/scenario-types.js';
 import { runScenario, RunInputError, RUN_CAUTION, type RunOutput, type StrategyResult, type TimelineLight } from '../../../schedules/run/index.js';
 import type { LightSourceSeries, MetricValue, ResultsView, RunView, SourceKind } from './view-model.js';
+import { viewEnsembleFromResults, withViewEnsemble } from './ensemble-view.js';
 
 export type PipelineOutcome =
-  | { readonly status: 'ready'; readonly view: ResultsView }
+  | { readonly status: 'ready'; readonly view: ResultsView; /** The pipeline's output, for the model ensemble that runs after it. */ readonly run?: RunOutput }
   | { readonly status: 'unavailable'; readonly message: string }
   | { readonly status: 'failed'; readonly message: string };
 
@@ -69,6 +70,7 @@ function metricsOf(s: StrategyResult): MetricValue[] {
     metric('kss7', 'Work time at KSS ≥ 7', '%', m.work_hours_kss_ge_7_share === null ? null : m.work_hours_kss_ge_7_share * 100, 0, 'lower'),
     metric('dose', 'Melanopic dose (mean per day)', 'lx·h', m.mean_mel_dose_lx_h, 0, 'none'),
     metric('sleep', 'Main sleep (mean)', 'h', m.mean_sleep_duration_h, 1, 'none', 'longer', 'shorter'),
+    metric('sleep-timing', 'DLMO to sleep onset (mean)', 'h', m.mean_phase_angle_dlmo_to_sleep_h, 2, 'none', 'longer', 'shorter'),
   ];
 }
 
@@ -99,7 +101,7 @@ export function viewFromRun(out: RunOutput, scenario: Scenario): ResultsView {
       if (tl !== undefined) runs.push(runView(tl, s));
     }
   }
-  return {
+  const view: ResultsView = {
     scenarioName: r.scenario.name,
     startDate: r.scenario.start_date,
     days: r.scenario.days,
@@ -115,6 +117,8 @@ export function viewFromRun(out: RunOutput, scenario: Scenario): ResultsView {
       headlines: p.strategies.find((s) => s.id === p.recommendation.strategy_id)?.headlines.map((h) => h.sentence) ?? [],
     })),
   };
+  const ensemble = viewEnsembleFromResults(r);
+  return ensemble === null ? view : withViewEnsemble(view, ensemble);
 }
 
 export async function runScenarioForView(scenario: Scenario, onProgress: ProgressReport): Promise<PipelineOutcome> {
@@ -124,7 +128,7 @@ export async function runScenarioForView(scenario: Scenario, onProgress: Progres
   }
   try {
     const out = runScenario({ scenario, onProgress });
-    return { status: 'ready', view: viewFromRun(out, scenario) };
+    return { status: 'ready', view: viewFromRun(out, scenario), run: out };
   } catch (err) {
     const message = err instanceof RunInputError ? err.message : `The run failed: ${err instanceof Error ? err.message : String(err)}`;
     return { status: 'failed', message };

@@ -53,6 +53,25 @@ export interface MetricValue {
   /** Words for an increase and a decrease, e.g. "later" / "earlier" for a clock time. */
   readonly increaseWord: string;
   readonly decreaseWord: string;
+  /** The same figure across the model ensemble, in the metric's unit, once the ensemble has run. */
+  readonly ensemble?: MetricEnsemble;
+}
+
+export interface MetricEnsemble {
+  readonly min: number;
+  readonly max: number;
+  /** Models that gave a value. */
+  readonly models: number;
+}
+
+/** The model ensemble behind the ranges: the models (defaults first, cited) and rank changes in words. */
+export interface ViewEnsembleModels {
+  /** Each model once: the body-clock models, then the sleepiness (KSS) models. */
+  readonly models: readonly { readonly role: 'body clock' | 'sleepiness'; readonly name: string; readonly source: string }[];
+  /** The model combinations run (body-clock × sleepiness model). */
+  readonly pairs: number;
+  /** Per persona, each strategy whose rank changes with the model, in words. */
+  readonly rankings: readonly { readonly personaId: string; readonly sentences: readonly string[] }[];
 }
 
 export interface RunView {
@@ -85,6 +104,8 @@ export interface ResultsView {
   readonly cautions: readonly string[];
   /** The pipeline's recommended strategy per persona, with its reason and headline sentences (absent in synthetic views). */
   readonly recommendations?: readonly Recommendation[];
+  /** Present once the model ensemble has run; the ranges are on the metrics. */
+  readonly ensemble?: ViewEnsembleModels;
 }
 
 export interface Recommendation {

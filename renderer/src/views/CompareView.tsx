@@ -1,9 +1,14 @@
 // Compare: every metric for the baseline and each strategy, the difference versus baseline
-// and a one-line reading.
+// and a one-line reading; once the model ensemble has run, each headline value's range across
+// the models beside it and, in words, any strategy whose rank changes with the model.
 import type { ResultsView } from '../results/view-model.js';
-import { comparisonRows, formatNumber } from '../charts/comparison-data.js';
+import { comparisonRows, ensembleRangeText, formatNumber } from '../charts/comparison-data.js';
+import { useEnsembleView } from '../state/use-ensemble-view.js';
+import { ensembleModelsWords } from '../results/ensemble-view.js';
 
-export function CompareView({ view, personaId, onExport }: { view: ResultsView; personaId: string; onExport: () => void }) {
+export function CompareView({ view: shown, personaId, onExport }: { view: ResultsView; personaId: string; onExport: () => void }) {
+  const view = useEnsembleView(shown);
+  const ranking = view.ensemble?.rankings.find((r) => r.personaId === personaId)?.sentences ?? [];
   const runs = view.runs.filter((r) => r.personaId === personaId);
   const strategies = view.strategies.filter((s) => runs.some((r) => r.strategyId === s.id));
   const rows = comparisonRows(runs, strategies, view.baselineId);
@@ -33,7 +38,15 @@ export function CompareView({ view, personaId, onExport }: { view: ResultsView; 
                 {row.unit !== '' && <span className="unit"> ({row.unit})</span>}
               </th>
               {row.cells.map((cell) => (
-                <td key={cell.strategyId} className={`verdict-${cell.verdict}`} title={cell.reading} data-metric={row.metricId} data-strategy={cell.strategyId} data-value={cell.value ?? ''}>
+                <td
+                  key={cell.strategyId}
+                  className={`verdict-${cell.verdict}`}
+                  title={cell.reading}
+                  data-metric={row.metricId}
+                  data-strategy={cell.strategyId}
+                  data-value={cell.value ?? ''}
+                  {...(cell.ensemble === undefined ? {} : { 'data-ensemble-min': cell.ensemble.min, 'data-ensemble-max': cell.ensemble.max, 'data-ensemble-models': cell.ensemble.models })}
+                >
                   <span className="value">{formatNumber(cell.value, row.decimals)}</span>
                   {cell.difference !== null && (
                     <span className="difference">
@@ -41,12 +54,29 @@ export function CompareView({ view, personaId, onExport }: { view: ResultsView; 
                       {formatNumber(Math.abs(cell.difference), row.decimals)}
                     </span>
                   )}
+                  {cell.ensemble !== undefined && <span className="ensemble-range">{ensembleRangeText(cell.ensemble, row.decimals)}</span>}
                 </td>
               ))}
             </tr>
           ))}
         </tbody>
       </table>
+      {view.ensemble !== undefined ? (
+        <div className="ensemble-note">
+          <p>
+            Ranges: the same light run through {ensembleModelsWords(view.ensemble)} — {view.ensemble.models.map((m, i, all) => `${m.name}${all.findIndex((x) => x.role === m.role) === i ? ' (default: the values shown)' : ''}`).join('; ')}. They show how far published models disagree for this scenario, not how people differ.
+          </p>
+          {ranking.length > 0 && (
+            <ul className="ensemble-ranking" aria-label="Ranking across models">
+              {ranking.map((sentence) => (
+                <li key={sentence}>{sentence}</li>
+              ))}
+            </ul>
+          )}
+        </div>
+      ) : (
+        <p className="ensemble-note ensemble-pending">Ranges across the other published models follow once they have run.</p>
+      )}
       <h3>Readings</h3>
       <ul className="readings">
         {rows.flatMap((row) =>
