@@ -21,7 +21,7 @@ export function BriefingReport({ data, records }: { data: ReportData; records: r
         return <PersonaResults key={s.persona.id} view={view} summary={s} nightly={data.nightly} day={day} />;
       })}
       <CohortSection doc={doc} view={view} />
-      <Methods records={records} runModels={data.runModels} />
+      <Methods records={records} runModels={data.runModels} ensemble={view.ensemble} />
       <ClosingCautions />
     </main>
   );

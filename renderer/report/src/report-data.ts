@@ -1,11 +1,13 @@
 // Everything the briefing draws, gathered from a checked document: the results view, the summary
-// per persona, facts of the scenario, nightly suppression and the models of the run.
+// per persona, facts of the scenario, nightly suppression and the models of the run (with the
+// ranges across the model ensemble when the results carry them).
 import type { BriefingDocument } from './briefing-document.js';
 import type { ResultsView } from '../../src/results/view-model.js';
 import { RESULTS_CAUTIONS } from '../../src/results/cautions.js';
 import { personaSummaries, type PersonaSummary } from './headlines.js';
 import { isRunResults, nightlySuppression, summariesFromResults, viewFromResults } from './results-view.js';
 import type { ScenarioFacts } from './scenario-facts.js';
+import { reportViewWithEnsemble } from './ensemble-report.js';
 
 export interface ReportData {
   readonly doc: BriefingDocument;
@@ -22,7 +24,7 @@ export interface ReportData {
 export function reportData(doc: BriefingDocument, facts: ScenarioFacts): ReportData | { error: string } {
   if (isRunResults(doc.results)) {
     const results = doc.results;
-    return { doc, facts, view: viewFromResults(results, RESULTS_CAUTIONS), summaries: summariesFromResults(results), nightly: nightlySuppression(results), runModels: { ...results.models }, warnings: results.warnings };
+    return { doc, facts, view: reportViewWithEnsemble(results, viewFromResults(results, RESULTS_CAUTIONS)), summaries: summariesFromResults(results), nightly: nightlySuppression(results), runModels: { ...results.models }, warnings: results.warnings };
   }
   if (doc.view === undefined) return { error: 'briefing document: no results' };
   return { doc, facts, view: doc.view, summaries: personaSummaries(doc.view, facts.workMinutesPerHour), nightly: null, runModels: null, warnings: [] };

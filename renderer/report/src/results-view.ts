@@ -62,6 +62,7 @@ function metricsOf(s: StrategyResult): MetricValue[] {
     metric('pre-sleep', 'Melanopic EDI before sleep (mean)', 'lx', m.mean_pre_sleep_mel_edi_lx, 1, 'lower'),
     metric('nights-10', 'Nights meeting ≤ 10 lx before sleep', `of ${m.nights_assessed}`, m.nights_pre_sleep_meeting_10_lx, 0, 'higher'),
     metric('sleep-duration', 'Sleep per night (mean)', 'h', m.mean_sleep_duration_h, 1, 'none', 'longer', 'shorter'),
+    metric('sleep-timing', 'DLMO to sleep onset (mean)', 'h', m.mean_phase_angle_dlmo_to_sleep_h, 2, 'none', 'longer', 'shorter'),
   ];
 }
 

@@ -2,7 +2,8 @@
 // recommended strategy), phase by day, melatonin, KSS by hour and a KSS grid, metrics table.
 import type { ResultsView } from '../../../src/results/view-model.js';
 import { findRun } from '../../../src/results/view-model.js';
-import { comparisonRows, formatNumber } from '../../../src/charts/comparison-data.js';
+import { comparisonRows, ensembleRangeText, formatNumber } from '../../../src/charts/comparison-data.js';
+import { ensembleModelsWords } from '../../../src/results/ensemble-view.js';
 import { kssGrid } from '../../../src/charts/kss-grid-data.js';
 import { kssColour } from '../../../src/charts/palette.js';
 import { bandCompliance, lightAtEyeRows, recommendationBands } from '../../../src/charts/light-at-eye-data.js';
@@ -95,7 +96,7 @@ function MetricsTable({ view, personaId }: { view: ResultsView; personaId: strin
               {row.unit === '' ? '' : ` (${row.unit})`}
             </td>
             {row.cells.map((c) => (
-              <td key={c.strategyId} className={`num verdict-${c.verdict}`}>
+              <td key={c.strategyId} className={`num verdict-${c.verdict}`} {...(c.ensemble === undefined ? {} : { 'data-ensemble-min': c.ensemble.min, 'data-ensemble-max': c.ensemble.max })}>
                 {formatNumber(c.value, row.decimals)}
                 {c.difference !== null && (
                   <span className="diff">
@@ -103,12 +104,27 @@ function MetricsTable({ view, personaId }: { view: ResultsView; personaId: strin
                     ({signedDifference(c.difference, row.decimals)})
                   </span>
                 )}
+                {c.ensemble !== undefined && <span className="ensemble-range">{ensembleRangeText(c.ensemble, row.decimals)}</span>}
               </td>
             ))}
           </tr>
         ))}
       </tbody>
     </table>
+  );
+}
+
+/** Strategies whose rank changes with the model, in words; a line saying the ranking holds otherwise. */
+function EnsembleRanking({ view, personaId }: { view: ResultsView; personaId: string }) {
+  if (view.ensemble === undefined) return null;
+  const sentences = view.ensemble.rankings.find((r) => r.personaId === personaId)?.sentences ?? [];
+  if (sentences.length === 0) return <p className="small">Across the {ensembleModelsWords(view.ensemble)}, every strategy keeps its rank under the recommendation rule.</p>;
+  return (
+    <ul className="small ensemble-ranking">
+      {sentences.map((sentence) => (
+        <li key={sentence}>{sentence}</li>
+      ))}
+    </ul>
   );
 }
 
@@ -163,8 +179,12 @@ export function PersonaResults({ view, summary, day, nightly }: { view: ResultsV
       <KssGridTable view={view} personaId={personaId} strategyId={rec?.strategy.id ?? view.baselineId} />
       <div className="keep">
         <h3>Metrics</h3>
-        <p className="small muted">Values per strategy; in brackets the difference from the baseline.</p>
+        <p className="small muted">
+          Values per strategy; in brackets the difference from the baseline.
+          {view.ensemble !== undefined && ` Below a value: its range when the same light is run through the ${ensembleModelsWords(view.ensemble)} listed under Methods (the value shown is the default model’s).`}
+        </p>
         <MetricsTable view={view} personaId={personaId} />
+        <EnsembleRanking view={view} personaId={personaId} />
       </div>
     </Section>
   );

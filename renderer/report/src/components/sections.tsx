@@ -3,12 +3,13 @@
 import type { ReactNode } from 'react';
 import type { BriefingDocument, CohortMetricRange } from '../briefing-document.js';
 import { cohortFromResults } from '../cohort-ranges.js';
-import type { ResultsView } from '../../../src/results/view-model.js';
+import type { ResultsView, ViewEnsembleModels } from '../../../src/results/view-model.js';
 import type { PersonaSummary, StrategyHeadline } from '../headlines.js';
 import type { ScenarioFacts } from '../scenario-facts.js';
 import type { ValidationRecordSummary } from '../validation-summary.js';
 import { RESULTS_CAUTIONS } from '../../../src/results/cautions.js';
 import { formatNumber } from '../../../src/charts/comparison-data.js';
+import { EnsembleMethods } from './EnsembleMethods.js';
 import { MODELS, NOT_MODELLED, UNIT_NOTES } from '../methods-text.js';
 import { TimelineDrawing } from './TimelineDrawing.js';
 
@@ -258,7 +259,7 @@ export function CohortSection({ doc, view }: { doc: BriefingDocument; view: Resu
   );
 }
 
-export function Methods({ records, runModels }: { records: readonly ValidationRecordSummary[]; runModels: Readonly<Record<string, string>> | null }) {
+export function Methods({ records, runModels, ensemble }: { records: readonly ValidationRecordSummary[]; runModels: Readonly<Record<string, string>> | null; ensemble?: ViewEnsembleModels | undefined }) {
   return (
     <Section id="methods" title="Methods and assumptions">
       <h3>Models</h3>
@@ -291,6 +292,7 @@ export function Methods({ records, runModels }: { records: readonly ValidationRe
           ))}
         </tbody>
       </table>
+      <EnsembleMethods ensemble={ensemble} />
       <h3>Units and conversions</h3>
       <ul className="small keep">
         {UNIT_NOTES.map((n) => (
