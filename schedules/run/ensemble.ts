@@ -155,7 +155,7 @@ export function assembleEnsemble(plan: EnsemblePlan, done: readonly EnsembleJobR
       note:
         `The same light at the eye run through ${pacemakers.length} published body-clock model${pacemakers.length === 1 ? '' : 's'}` +
         `${both ? ` and ${sleepiness.length} sleepiness models (every pairing; the sleepiness models change only the KSS figures)` : ''}; ` +
-        `each figure's range is the lowest and highest of the models' values, beside the default model's (${pacemakerName(own.pacemaker)}${both ? `, ${sleepinessName(own.sleepiness)}` : ''}). ` +
+        `each figure's range is the lowest and highest of the models' values, beside the default model's (${pacemakerName(own.pacemaker)}${both ? `; ${sleepinessName(own.sleepiness)}` : ''}). ` +
         'A range shows how far published models disagree for this scenario, not the spread between people (see the cohort for that).',
     },
   };
