@@ -7,27 +7,20 @@
  * `caution` are extra.
  * Without --sleep, sleep is predicted by the model (free sleep), with an optional daily alarm.
  */
-import { readFileSync } from 'node:fs';
 import { CliError, UsageError } from '../cli-error.js';
 import type { Command, CommandContext } from '../command.js';
 import { numberOption, positionals, requiredNumberOption, stringOption } from '../args.js';
+import { readInputFile } from '../input-file.js';
 import { formatTable, HEALTH_CAUTION, printJson } from '../output.js';
 import { DLMO_BEFORE_CBTMIN_H, runBodyClock, type InitialCondition } from '../../model/circadian/body-clock.js';
-import { BodyClockInputError, parseLightCsv, parseSleepCsv } from '../../model/circadian/light-csv.js';
+import { BodyClockInputError, parseSleepCsv } from '../../model/circadian/light-csv.js';
+import { lightFromSteps } from '../../model/circadian/light-series.js';
+import { LightSeriesCsvError, readLightSeriesCsv } from '../../schedules/lightlog/light-series-csv.js';
+import { isValidTimeZone } from '../../schedules/time/local-calendar.js';
 import { createPacemaker, DEFAULT_PACEMAKER_ID, isPacemakerId, PACEMAKER_IDS } from '../../model/circadian/registry.js';
 import type { SleepSpec } from '../../model/circadian/sleep-input.js';
 
 const MAX_DAYS = 366;
-
-function readText(path: string, what: string): string {
-  try {
-    return readFileSync(path, 'utf8');
-  } catch (err) {
-    const code = (err as NodeJS.ErrnoException).code;
-    const why = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a directory' : code === 'EACCES' ? 'permission denied' : (err as Error).message;
-    throw new CliError(`cannot read ${what} file "${path}": ${why}`);
-  }
-}
 
 function parseInit(text: string | undefined, modelId: string, stateSize: number, names: readonly string[]): InitialCondition {
   if (text === undefined || text === 'entrained') return { kind: 'entrained' };
@@ -51,13 +44,14 @@ const clock = (t: number) => {
 export const simulateCommand: Command = {
   name: 'simulate',
   summary: 'Body clock (CBTmin, DLMO), melatonin suppression and sleepiness (KSS) from a light series',
-  usage: `<light.csv> --days <n> [--model <${PACEMAKER_IDS.join('|')}>] [--init entrained|<x,xc,n>] [--sleep <csv>] [--alarm <hour>]`,
+  usage: `<light.csv> --days <n> [--model <${PACEMAKER_IDS.join('|')}>] [--init entrained|<x,xc,n>] [--sleep <csv>] [--alarm <hour>] [--time-zone <IANA zone>]`,
   options: {
     days: { type: 'string' },
     model: { type: 'string' },
     init: { type: 'string' },
     sleep: { type: 'string' },
     alarm: { type: 'string' },
+    'time-zone': { type: 'string' },
   },
   async run(ctx: CommandContext): Promise<number> {
     const [lightPath] = positionals(ctx, ['light.csv']) as [string];
@@ -71,23 +65,27 @@ export const simulateCommand: Command = {
     if (alarm !== undefined && !(alarm >= 0 && alarm < 24)) throw new UsageError(`--alarm: a clock hour from 0 to below 24, got ${alarm}`);
     const sleepPath = stringOption(ctx, 'sleep');
     if (sleepPath !== undefined && alarm !== undefined) throw new UsageError('--alarm applies to predicted sleep only; leave it out when --sleep is given');
+    const timeZone = stringOption(ctx, 'time-zone');
+    if (timeZone !== undefined && !isValidTimeZone(timeZone)) throw new UsageError(`--time-zone: "${timeZone}" is not an IANA time zone such as Europe/Berlin`);
 
     let light;
+    let lightFile;
     let sleep: SleepSpec;
     try {
-      light = parseLightCsv(readText(lightPath, 'light'), lightPath);
+      lightFile = readLightSeriesCsv(readInputFile(lightPath, 'light-log'), lightPath, timeZone !== undefined ? { timeZone } : {});
+      light = lightFromSteps(lightFile.start_h, lightFile.level, lightFile.unit);
       sleep =
         sleepPath === undefined
           ? { mode: 'free', ...(alarm === undefined ? {} : { alarm_h: alarm }) }
-          : { mode: 'prescribed', episodes: parseSleepCsv(readText(sleepPath, 'sleep'), sleepPath) };
+          : { mode: 'prescribed', episodes: parseSleepCsv(readInputFile(sleepPath, 'sleep', '--sleep'), sleepPath) };
     } catch (err) {
-      if (err instanceof BodyClockInputError) throw new CliError(err.message);
+      if (err instanceof BodyClockInputError || err instanceof LightSeriesCsvError) throw new CliError(err.message);
       throw err;
     }
 
     const r = runBodyClock({ modelId, light, days, sleep, init });
     const lastRow_h = light.start_h[light.start_h.length - 1] as number;
-    const warnings: string[] = [];
+    const warnings: string[] = [...lightFile.warnings];
     if (lastRow_h < 24 * days - 24) {
       warnings.push(`the light series ends at hour ${lastRow_h}; its last value (${light.level[light.level.length - 1]} ${light.unit === 'native_lx' ? 'lux' : 'lx melanopic EDI'}) holds to the end of day ${days - 1}`);
     }
@@ -102,7 +100,7 @@ export const simulateCommand: Command = {
       melatonin_pg_ml_hourly: r.melatonin_pg_ml_hourly.map((v) => round(v, 2)),
       sleep_episodes: r.sleep_episodes.map((e) => ({ start_h: round(e.start_h), end_h: round(e.end_h) })),
       entrainment: r.entrainment ?? null,
-      input: { light: lightPath, light_unit: light.unit, sleep: sleepPath ?? (alarm === undefined ? 'predicted' : `predicted, alarm ${alarm} h`), days },
+      input: { light: lightPath, light_unit: light.unit, light_form: lightFile.form, start_local: lightFile.start_local, sleep: sleepPath ?? (alarm === undefined ? 'predicted' : `predicted, alarm ${alarm} h`), days },
       warnings,
       definitions: {
         cbtmin_h: `x minimum + ${model.marker.cbtminOffset_h} h (model's phase-reference offset)`,

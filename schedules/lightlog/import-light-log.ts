@@ -1,14 +1,14 @@
 /**
  * Measured light logs (CSV from wearable light loggers) → timed samples of photopic
  * illuminance and/or melanopic EDI at the eye, with gaps detected and reported.
- * The text is parsed with papaparse (delimiter detected: comma, semicolon or tab; decimal
+ * The text is read by csv-table.ts (delimiter detected: comma, semicolon, tab or bar; decimal
  * commas accepted when the delimiter is not a comma). Lines starting with "#" are comments.
  * Raw channels become lux and melanopic EDI through the user's linear calibration
  * (value = Σ kᵢ·channelᵢ).
  */
-import Papa from 'papaparse';
 import type { FillRule, TimestampFormat } from '../schema/light-log-schema.js';
 import type { LightLogSpec } from '../schema/scenario-types.js';
+import { readCsvTable, readNumber } from './csv-table.js';
 import { describeGap } from './gap-notes.js';
 import { detectTimestampFormat, parseTimestamp } from './timestamp.js';
 
@@ -74,14 +74,6 @@ function findColumn(header: readonly string[], wanted: string | undefined, patte
   return -1;
 }
 
-function readNumber(text: string | undefined, decimalComma: boolean): number {
-  if (text === undefined) return Number.NaN;
-  let t = text.trim();
-  if (t === '') return Number.NaN;
-  if (decimalComma && !t.includes('.')) t = t.replace(',', '.');
-  return /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(t) ? Number(t) : Number.NaN;
-}
-
 function isNotWorn(text: string | undefined): boolean {
   const t = (text ?? '').trim().toLowerCase();
   return t === '0' || t === 'false' || t === 'no' || t === 'n' || t === 'off';
@@ -98,34 +90,11 @@ function fail(problems: LogProblem[], message: string, fix: string, line: number
   return { ok: false, log: undefined, problems };
 }
 
-/**
- * The delimiter, judged from the header line (it holds no decimal commas): the most frequent of
- * semicolon, tab and bar when any occurs, else comma.
- */
-function guessDelimiter(text: string): string {
-  const header = text.split(/\r?\n/).find((l) => l.trim() !== '' && !l.trim().startsWith('#')) ?? '';
-  let best = ',';
-  let bestCount = 0;
-  for (const d of [';', '\t', '|']) {
-    const n = header.split(d).length - 1;
-    if (n > bestCount) {
-      best = d;
-      bestCount = n;
-    }
-  }
-  return best;
-}
-
 export function importLightLog(text: string, options: LightLogOptions): LightLogImport {
   const problems: LogProblem[] = [];
-  const delimiter = guessDelimiter(text);
-  const parsed = Papa.parse<string[]>(text, { header: false, skipEmptyLines: false, delimiter });
-  const decimalComma = delimiter !== ',';
-  const rows = parsed.data.map((cells, i) => ({ cells, line: i + 1 })).filter((r) => !(r.cells.length === 1 && (r.cells[0] ?? '').trim() === '') && !(r.cells[0] ?? '').trim().startsWith('#'));
-  const headerRow = rows[0];
+  const { decimalComma, header: headerRow, body } = readCsvTable(text);
   if (headerRow === undefined) return fail(problems, 'the file is empty', 'Export the log again as CSV with a header line.');
   const header = headerRow.cells.map((h) => h.trim());
-  const body = rows.slice(1);
   if (body.length === 0) return fail(problems, 'the file has a header but no readings', 'Export the log again with its readings.', headerRow.line);
 
   const tsCol = findColumn(header, options.timestampColumn, [/^(date[ _-]?)?time(stamp)?$/i, /time|date/i]);

@@ -70,18 +70,21 @@ describe('zeitlight simulate', () => {
     expect(JSON.parse(r.out).entrainment).toBeNull();
   });
 
-  it('names the file and line of a bad light value', async () => {
-    const p = tmpFile('bad.csv', 'hour,lux\n0,0\n7,abc\n');
+  it('skips a bad light value and names its file and line, as the light-log reader does', async () => {
+    const p = tmpFile('bad.csv', 'hour,lux\n0,0\n7,abc\n9,100\n');
     const r = await cli(['simulate', p, '--days', '1', '--json']);
-    expect(r.code).toBe(1);
-    expect(r.out).toBe('');
-    expect(r.err).toContain('bad.csv, line 3');
+    expect(r.code).toBe(0);
+    expect((JSON.parse(r.out) as { warnings: string[] }).warnings).toContainEqual(expect.stringContaining('bad.csv, line 3'));
+    const mostlyBad = await cli(['simulate', tmpFile('worse.csv', 'hour,lux\n0,0\n7,abc\n9,?\n'), '--days', '1', '--json']);
+    expect(mostlyBad.code).toBe(1);
+    expect(mostlyBad.out).toBe('');
+    expect(mostlyBad.err).toContain('worse.csv, line 3');
   });
 
   it('refuses hours out of order, a wrong header, a bad sleep row and a bad --init', async () => {
     const order = await cli(['simulate', tmpFile('o.csv', 'hour,lux\n0,0\n7,5\n6,1\n'), '--days', '1']);
     expect(order.err).toMatch(/o\.csv, line 4: hour 6 is not after/);
-    const head = await cli(['simulate', tmpFile('h.csv', 'time,lux\n0,0\n'), '--days', '1']);
+    const head = await cli(['simulate', tmpFile('h.csv', 'hour,lumens\n0,0\n'), '--days', '1']);
     expect(head.err).toMatch(/h\.csv, line 1: header must be/);
     const sleep = await cli(['simulate', join(FIX, 'regular-day-lux.csv'), '--days', '1', '--sleep', tmpFile('s.csv', 'start_h,end_h\n23,22\n')]);
     expect(sleep.err).toMatch(/s\.csv, line 2: end_h/);

@@ -1,0 +1,70 @@
+/**
+ * The text layer shared by every light-series reader (measured light logs for a scenario, light
+ * series for `zeitlight simulate`): delimiter judged from the header line (comma, semicolon, tab
+ * or bar), rows parsed with papaparse, blank lines and lines starting with "#" skipped, each row
+ * keeping its 1-based line number, and numbers read with a decimal comma when the delimiter is
+ * not a comma. Messages quote rows with the file's own delimiter.
+ */
+import Papa from 'papaparse';
+
+export interface CsvRow {
+  readonly cells: readonly string[];
+  /** 1-based line in the file. */
+  readonly line: number;
+}
+
+export interface CsvTable {
+  readonly delimiter: string;
+  /** True when numbers may be written with a decimal comma (the delimiter is not a comma). */
+  readonly decimalComma: boolean;
+  /** The first row that is neither blank nor a comment. */
+  readonly header: CsvRow | undefined;
+  readonly body: readonly CsvRow[];
+}
+
+/**
+ * The delimiter, judged from the header line (it holds no decimal commas): the most frequent of
+ * semicolon, tab and bar when any occurs, else comma.
+ */
+export function guessDelimiter(text: string): string {
+  const header = text.split(/\r?\n|\r/).find((l) => l.trim() !== '' && !l.trim().startsWith('#')) ?? '';
+  let best = ',';
+  let bestCount = 0;
+  for (const d of [';', '\t', '|']) {
+    const n = header.split(d).length - 1;
+    if (n > bestCount) {
+      best = d;
+      bestCount = n;
+    }
+  }
+  return best;
+}
+
+export function readCsvTable(text: string): CsvTable {
+  const delimiter = guessDelimiter(text);
+  const parsed = Papa.parse<string[]>(text, { header: false, skipEmptyLines: false, delimiter });
+  // papaparse gives one entry per record; a quoted cell may span lines, so count the newlines.
+  const rows: CsvRow[] = [];
+  let line = 1;
+  for (const cells of parsed.data) {
+    const first = (cells[0] ?? '').trim();
+    const blank = cells.every((c) => c.trim() === '');
+    if (!blank && !first.startsWith('#')) rows.push({ cells, line });
+    line += 1 + cells.reduce((n, c) => n + (c.match(/\r\n|\r|\n/g)?.length ?? 0), 0);
+  }
+  return { delimiter, decimalComma: delimiter !== ',', header: rows[0], body: rows.slice(1) };
+}
+
+/** Cells joined with the file's delimiter, as the user sees them in the file. */
+export function rowText(cells: readonly string[], delimiter: string): string {
+  return cells.map((c) => c.trim()).join(delimiter === '\t' ? '<tab>' : delimiter);
+}
+
+/** A plain decimal number (optionally signed, with exponent); NaN for anything else. */
+export function readNumber(text: string | undefined, decimalComma: boolean): number {
+  if (text === undefined) return Number.NaN;
+  let t = text.trim();
+  if (t === '') return Number.NaN;
+  if (decimalComma && !t.includes('.')) t = t.replace(',', '.');
+  return /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(t) ? Number(t) : Number.NaN;
+}
