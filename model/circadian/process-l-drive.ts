@@ -11,7 +11,8 @@
  * (α, β per minute, G in minutes: the published units; s, Δ in hours). In darkness α = 0, B̂ = 0
  * and n decays as e^{−60βs}. Light is taken piece by piece from the series, multiplied by a
  * constant gain (sleep gating and light sensitivity, constant between the caller's breakpoints);
- * a smooth piece of the series is read at the middle of each minute.
+ * a smooth piece of the series is read at the middle of each minute; a series of one repeated
+ * day is read at t mod 24 h.
  *
  * Units: light in native lux of the model's calibration source; time in hours since t = 0.
  */
@@ -50,8 +51,8 @@ export class ProcessLDrive implements Drive {
     private readonly gain: number,
     t0: number,
     n0: number,
-    /** Offset added to t before reading the series (for a periodic day: the day's start). */
-    private readonly readOffset: (t: number) => number = (t) => t,
+    /** When set, the series describes one period (a repeated day of 24 h) read at t mod period. */
+    private readonly period_h?: number,
   ) {
     this.t = t0;
     this.n = n0;
@@ -64,6 +65,12 @@ export class ProcessLDrive implements Drive {
 
   get time(): number {
     return this.t;
+  }
+
+  /** Time in the series for simulation time t (t mod period, with a small tolerance at the edge). */
+  private readOffset(t: number): number {
+    const p = this.period_h;
+    return p === undefined ? t : t - p * Math.floor((t + 1e-12) / p);
   }
 
   /** α (min⁻¹) of the light just after time t. */
@@ -83,6 +90,7 @@ export class ProcessLDrive implements Drive {
     let next = i + 1 < s.length ? (s[i + 1] as number) : Number.POSITIVE_INFINITY;
     if (next <= tr) next = Number.POSITIVE_INFINITY;
     if (this.light.smooth?.[i] !== undefined) next = Math.min(next, tr + MINUTE_H);
+    if (this.period_h !== undefined) next = Math.min(next, this.period_h);
     return Math.min(tEnd, t + (next - tr));
   }
 

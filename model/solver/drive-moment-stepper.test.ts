@@ -50,7 +50,7 @@ describe('drive-moment stepper', () => {
     // Closed form: y(t) = y0·exp(∫₀ᵗ b ds) for any b. Light switched on and off every 37 minutes,
     // so jumps fall anywhere inside the steps.
     const pulses = Array.from({ length: 720 }, (_, m) => (Math.floor(m / 37) % 2 === 0 ? 0 : 1.2));
-    const area = pulses.reduce((a, b) => a + b / 60, 0);
+    const area = pulses.reduce((sum: number, b) => sum + b / 60, 0);
     const system: DrivenSystem = { size: 1, free: (_y, out) => out.fill(0), coupling: (y, out) => (out[0] = y[0] as number) };
     const errorFor = (drive: readonly number[], exact: number, H: number) => {
       const r = integrateDriven(system, new MinuteDrive(drive), 0, [1], 12, fixedStep(H));
@@ -101,7 +101,9 @@ describe('drive-moment stepper', () => {
   it('reports every accepted step end to end with the state and derivative at both ends', () => {
     const system: DrivenSystem = { size: 1, free: (y, out) => (out[0] = -(y[0] as number)), coupling: (_y, out) => (out[0] = 1) };
     const steps: { t0: number; t1: number; y0: number; y1: number }[] = [];
-    const r = integrateDriven(system, new MinuteDrive(levels), 0, [1], 6, undefined, undefined, (s) => steps.push({ t0: s.t0, t1: s.t1, y0: s.y0[0] as number, y1: s.y1[0] as number }));
+    const r = integrateDriven(system, new MinuteDrive(levels), 0, [1], 6, undefined, undefined, (s) => {
+      steps.push({ t0: s.t0, t1: s.t1, y0: s.y0[0] as number, y1: s.y1[0] as number });
+    });
     expect(steps[0]?.t0).toBe(0);
     expect(steps.at(-1)?.t1).toBe(6);
     for (let i = 1; i < steps.length; i++) {
@@ -110,5 +112,13 @@ describe('drive-moment stepper', () => {
     }
     expect(steps.at(-1)?.y1).toBe(r.y[0]);
     expect(r.steps).toBe(steps.length);
+  });
+
+  it('stops inside a step when the observer asks, saying where', () => {
+    const system: DrivenSystem = { size: 1, free: (_y, out) => (out[0] = 1), coupling: (_y, out) => (out[0] = 0) };
+    const r = integrateDriven(system, new MinuteDrive([0]), 0, [0], 5, undefined, undefined, (s) => (s.y1[0] as number) > 2 ? s.t0 + 0.5 * (s.t1 - s.t0) : undefined);
+    expect(r.stopAt).toBeDefined();
+    expect(r.stopAt as number).toBeLessThan(5);
+    expect(r.y[0]).toBeGreaterThan(2);
   });
 });

@@ -73,7 +73,10 @@ export interface AcceptedStep {
 }
 
 export interface DrivenIntegration {
+  /** State at the end (t1, or the end of the step in which `onStep` asked to stop). */
   readonly y: Float64Array;
+  /** The time `onStep` asked to stop at, if it did (inside the last accepted step). */
+  readonly stopAt?: number;
   readonly steps: number;
   readonly rejected: number;
   /** Evaluations of F plus evaluations of g. */
@@ -141,8 +144,11 @@ export function driveMomentStep(system: DrivenSystem, y0: ArrayLike<number>, H: 
 
 /**
  * Integrates from t0 to t1 (> t0) across every jump of the drive, with adaptive steps. The
- * drive must be committed at t0; it is committed at t1 on return. `onStep` sees every accepted
- * step with both end states and derivatives (for dense output and event location).
+ * drive must be committed at t0; it is committed at the end on return. `onStep` sees every
+ * accepted step with both end states and derivatives (for dense output and event location); it
+ * may return a time inside that step to stop the integration there (the caller then takes the
+ * state at that time from the step). `exact` overwrites, after each accepted step, the components
+ * that the caller evolves in closed form alongside the drive (F and g are zero for them).
  */
 export function integrateDriven(
   system: DrivenSystem,
@@ -152,8 +158,9 @@ export function integrateDriven(
   t1: number,
   tol: DriveStepperTolerances = DRIVE_STEPPER_DEFAULT_TOLERANCES,
   firstStep = tol.initialStep,
-  onStep?: (step: AcceptedStep) => void,
+  onStep?: (step: AcceptedStep) => number | undefined | void,
   work: DriveStepperWork = new DriveStepperWork(system.size),
+  exact?: (y: Float64Array) => void,
 ): DrivenIntegration {
   const n = system.size;
   const y = Float64Array.from(y0);
@@ -182,13 +189,18 @@ export function integrateDriven(
     const b0 = drive.valueNow();
     if (onStep !== undefined) for (let i = 0; i < n; i++) dy0[i] = (f0[i] as number) + b0 * (g0[i] as number);
     drive.advance(tEnd);
+    exact?.(y1);
     system.free(y1, f1);
     system.coupling(y1, g1);
     evaluations += 2;
     if (onStep !== undefined) {
       const b1 = drive.valueNow();
       for (let i = 0; i < n; i++) dy1[i] = (f1[i] as number) + b1 * (g1[i] as number);
-      onStep({ t0: t, t1: tEnd, y0: y.slice(), y1: y1.slice(), dy0: dy0.slice(), dy1: dy1.slice() });
+      const stop = onStep({ t0: t, t1: tEnd, y0: y.slice(), y1: y1.slice(), dy0: dy0.slice(), dy1: dy1.slice() });
+      if (typeof stop === 'number') {
+        y.set(y1);
+        return { y, stopAt: stop, steps: steps + 1, rejected, evaluations, nextStep: H };
+      }
     }
     y.set(y1);
     f0.set(f1);
