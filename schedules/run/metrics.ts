@@ -10,7 +10,9 @@
  * eyelids asleep (received-light.ts); the sleep-environment figure (≤ 1 lx) is the room's light
  * at the open eye, as Brown et al. state it.
  */
+import { DLMO_BEFORE_CBTMIN_H } from '../../model/circadian/body-clock.js';
 import type { ExposureTimeline } from '../timeline/exposure-types.js';
+import { alignmentSummary } from './alignment.js';
 import type { BodyClockOutcome } from './body-clock-run.js';
 import type { EyeSeries, LightSource } from './eye-series.js';
 import { LIGHT_SOURCES } from './eye-series.js';
@@ -182,6 +184,23 @@ export function strategyMetrics(inp: StrategyInput): Omit<StrategyResult, 'headl
     mean_sleep_duration_h: roundOrNull(mean(days.flatMap((d) => (d.sleep_duration_h === null ? [] : [d.sleep_duration_h]))), 4),
   };
 
+  // Alignment over every day of the run, like the sleepiness and suppression headlines: a roster's
+  // night shifts may lie anywhere in it.
+  const alignment =
+    timeline.days.length === 0
+      ? null
+      : alignmentSummary({
+          from_h: 0,
+          to_h: n / 60,
+          days: timeline.days.length,
+          work: timeline.slices.filter((s) => s.activity === 'work').map((s) => ({ start_h: s.start_min / 60, end_h: s.end_min / 60 })),
+          sleep: bc.sleepEpisodes,
+          mainSleepMin_h: MAIN_SLEEP_MIN_H,
+          dlmo_h: bc.dlmo_h,
+          cbtmin_h: bc.cbtmin_h,
+          fallbackDlmoBeforeCbtmin_h: DLMO_BEFORE_CBTMIN_H,
+        });
+
   const hours = Math.ceil(n / 60);
   const hourlySources = {} as SourceMap<number[]>;
   for (const src of LIGHT_SOURCES) hourlySources[src] = hourlyMeans(eye.melBySource[src], hours);
@@ -202,5 +221,6 @@ export function strategyMetrics(inp: StrategyInput): Omit<StrategyResult, 'headl
     sleep_episodes: bc.sleepEpisodes.map((e) => ({ start: ev(e.start_h), end: ev(e.end_h), duration_h: round(e.end_h - e.start_h, 4) })),
     melatonin_nights: bc.nights.map((nt, i) => ({ onset: ev(nt.onset_h), end_h: round(nt.end_h, 4), suppression_pct: nt.end_h < n / 60 - 1e-6 ? roundOrNull(bc.suppression_pct[i] ?? null, 3) : null })),
     solver: { light_segments: bc.segments, rhs_evaluations: inp.rhsEvaluations },
+    alignment,
   };
 }

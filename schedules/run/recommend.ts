@@ -1,19 +1,25 @@
 /**
  * Headline sentences and the recommended strategy per persona.
  *
- * Rule (docs/methods/pipeline.md §5): compare each strategy with the baseline on
- *   1. the share of work hours at KSS ≥ 7 (lower is better),
- *   2. the mean melatonin suppression per night (lower is better),
- *   3. the mean daytime hours at ≥ 250 lx melanopic EDI (higher is better),
- * in that order, a difference counting only when it reaches 1 percentage point, 2 percentage
- * points and 0.25 h respectively (smaller differences lie within the models' resolution for
- * planning). A strategy qualifies when it is better than the baseline on at least one of the
- * three and worse on none of the first two by more than those margins; the best qualifying
- * strategy by the ordered comparison is recommended. When none qualifies, the baseline is.
+ * Rule (docs/methods/pipeline.md §5). Each strategy is compared with the baseline on, in order:
+ *   1. the share of work hours at KSS ≥ 7 (lower is better; counts from 1 percentage point),
+ *   2. misalignment of the body clock with the person's work and sleep hours, hours per day
+ *      (alignment.ts; lower is better; counts from 0.25 h),
+ *   3. the mean melatonin suppression per night (lower is better; counts from 2 points),
+ *   4. the mean daytime hours at ≥ 250 lx melanopic EDI (higher is better; counts from 0.25 h).
+ * The first difference that reaches its margin decides (smaller differences lie within the
+ * models' resolution for planning). A strategy qualifies when it ranks above the baseline this way
+ * and is worse than the baseline on neither of the first two; the best qualifying strategy is
+ * recommended, otherwise the baseline. Melatonin suppression and daytime light only break ties:
+ * a strategy that realigns the body clock is not ruled out because light at night suppresses
+ * more melatonin (the sentences still say so).
  */
-import type { Headline, Recommendation, StrategyResult, StrategySummary } from './results-types.js';
+import { ALIGNMENT_MARGIN_H } from './alignment.js';
+import { phaseShiftSentence } from './phase-words.js';
+import type { Headline, Recommendation, StrategyResult } from './results-types.js';
 
 export const KSS_SHARE_MARGIN = 0.01;
+export const MISALIGNMENT_MARGIN_H = ALIGNMENT_MARGIN_H;
 export const SUPPRESSION_MARGIN_PCT = 2;
 export const DAYTIME_MARGIN_H = 0.25;
 
@@ -23,79 +29,141 @@ const hm = (h: number) => {
   return min >= 60 ? `${Math.floor(min / 60)} h ${String(min % 60).padStart(2, '0')} min` : `${min} min`;
 };
 
-export function headlines(personName: string, s: StrategySummary, base: StrategySummary, strategyName: string, isBaseline: boolean): Headline[] {
+type Scored = Pick<StrategyResult, 'summary' | 'alignment'>;
+
+export function headlines(personName: string, s: Scored, base: Scored, strategyName: string, isBaseline: boolean): Headline[] {
   const under = isBaseline ? 'Under the baseline' : `Under "${strategyName}"`;
-  const shift = s.mean_phase_shift_h;
-  const phase =
-    isBaseline
-      ? `The baseline is the reference for phase shifts: ${personName}'s body clock is compared with it under each strategy.`
-      : shift === null
-        ? `${under}, no phase shift could be read for ${personName} (no matching body-clock minimum).`
-        : Math.abs(shift) < 5 / 60
-          ? `${under}, ${personName}'s body clock keeps about the same timing as under the baseline (within 5 min, last days of the run).`
-          : `${under}, ${personName}'s body clock runs about ${hm(shift)} ${shift < 0 ? 'earlier' : 'later'} than under the baseline (core-temperature minimum, mean of the last days of the run).`;
-  const sup = s.mean_melatonin_suppression_pct;
+  const shift = s.summary.mean_phase_shift_h;
+  const phase = phaseShiftSentence({ person: personName, strategyName, isBaseline, later_h: shift, alignment: s.alignment, baselineAlignment: base.alignment });
+  const sup = s.summary.mean_melatonin_suppression_pct;
+  const baseSup = base.summary.mean_melatonin_suppression_pct;
   const melSentence =
     sup === null
       ? `${under}, no night could be assessed for melatonin suppression.`
-      : `${under}, light at night suppresses ${personName}'s melatonin by about ${Math.round(sup)} % per night on average${isBaseline || base.mean_melatonin_suppression_pct === null ? '' : `, against ${Math.round(base.mean_melatonin_suppression_pct)} % under the baseline`}.`;
-  const k = s.work_hours_kss_ge_7_share;
+      : `${under}, light at night suppresses ${personName}'s melatonin by about ${Math.round(sup)} % per night on average${isBaseline || baseSup === null ? '' : `, against ${Math.round(baseSup)} % under the baseline`}.`;
+  const k = s.summary.work_hours_kss_ge_7_share;
+  const baseK = base.summary.work_hours_kss_ge_7_share;
   const kssSentence =
     k === null
       ? `${under}, ${personName} has no work hours in this period.`
-      : `${under}, ${personName} is predicted to be sleepy (KSS 7 or more) in ${pct(k)} of work hours${isBaseline || base.work_hours_kss_ge_7_share === null ? '' : `, against ${pct(base.work_hours_kss_ge_7_share)} under the baseline`}.`;
+      : `${under}, ${personName} is predicted to be sleepy (KSS 7 or more) in ${pct(k)} of work hours${isBaseline || baseK === null ? '' : `, against ${pct(baseK)} under the baseline`}.`;
   return [
     { metric: 'phase_shift_h', value: shift, baseline: 0, sentence: phase },
-    { metric: 'melatonin_suppression_pct', value: sup, baseline: base.mean_melatonin_suppression_pct, sentence: melSentence },
-    { metric: 'work_hours_kss_ge_7_share', value: k, baseline: base.work_hours_kss_ge_7_share, sentence: kssSentence },
+    { metric: 'melatonin_suppression_pct', value: sup, baseline: baseSup, sentence: melSentence },
+    { metric: 'work_hours_kss_ge_7_share', value: k, baseline: baseK, sentence: kssSentence },
   ];
 }
 
-interface Gains {
+/** The four figures the rule compares; null where a figure could not be assessed. */
+export interface RuleFigures {
+  /** Share of work hours at KSS ≥ 7 (0–1). */
+  readonly sleepyWorkShare: number | null;
+  readonly misalignment_h_per_day: number | null;
+  readonly suppression_pct: number | null;
+  readonly daytime_h_ge_250_lx: number | null;
+}
+
+export function ruleFiguresOf(s: Scored): RuleFigures {
+  return {
+    sleepyWorkShare: s.summary.work_hours_kss_ge_7_share,
+    misalignment_h_per_day: s.alignment?.misalignment_h_per_day ?? null,
+    suppression_pct: s.summary.mean_melatonin_suppression_pct,
+    daytime_h_ge_250_lx: s.summary.mean_daytime_hours_ge_250_lx,
+  };
+}
+
+/** How much better a is than b on each figure (positive = a better); 0 where either is missing. */
+export interface Gains {
   readonly kss: number;
+  readonly misalignment: number;
   readonly suppression: number;
   readonly daytime: number;
 }
 
-function gains(s: StrategySummary, b: StrategySummary): Gains {
+const lowerIsBetter = (a: number | null, b: number | null) => (a === null || b === null ? 0 : b - a);
+
+export function gains(a: RuleFigures, b: RuleFigures): Gains {
   return {
-    kss: (b.work_hours_kss_ge_7_share ?? 0) - (s.work_hours_kss_ge_7_share ?? 0),
-    suppression: (b.mean_melatonin_suppression_pct ?? 0) - (s.mean_melatonin_suppression_pct ?? 0),
-    daytime: s.mean_daytime_hours_ge_250_lx - b.mean_daytime_hours_ge_250_lx,
+    kss: lowerIsBetter(a.sleepyWorkShare, b.sleepyWorkShare),
+    misalignment: lowerIsBetter(a.misalignment_h_per_day, b.misalignment_h_per_day),
+    suppression: lowerIsBetter(a.suppression_pct, b.suppression_pct),
+    daytime: a.daytime_h_ge_250_lx === null || b.daytime_h_ge_250_lx === null ? 0 : a.daytime_h_ge_250_lx - b.daytime_h_ge_250_lx,
   };
 }
 
-/** Positive when a is better than b by the ordered comparison. */
-function compare(a: Gains, b: Gains): number {
-  if (Math.abs(a.kss - b.kss) >= KSS_SHARE_MARGIN) return a.kss - b.kss;
-  if (Math.abs(a.suppression - b.suppression) >= SUPPRESSION_MARGIN_PCT) return a.suppression - b.suppression;
-  if (Math.abs(a.daytime - b.daytime) >= DAYTIME_MARGIN_H) return a.daytime - b.daytime;
+const ORDER: readonly { readonly key: keyof Gains; readonly margin: number }[] = [
+  { key: 'kss', margin: KSS_SHARE_MARGIN },
+  { key: 'misalignment', margin: MISALIGNMENT_MARGIN_H },
+  { key: 'suppression', margin: SUPPRESSION_MARGIN_PCT },
+  { key: 'daytime', margin: DAYTIME_MARGIN_H },
+];
+// Figures are rounded in results.json, so a difference of exactly a margin may carry float noise.
+const EPS = 1e-9;
+
+/** Positive when a ranks above b by the ordered comparison, negative below, 0 when no margin separates them. */
+export function compareByRule(a: RuleFigures, b: RuleFigures): number {
+  const g = gains(a, b);
+  for (const { key, margin } of ORDER) if (Math.abs(g[key]) >= margin - EPS) return g[key];
   return 0;
 }
 
-export const RECOMMENDATION_RULE =
-  'Compared with the baseline, in order: fewer work hours at KSS 7 or more (by at least 1 percentage point), less melatonin suppression per night (by at least 2 points), ' +
-  'more daytime hours at 250 lx melanopic EDI or more (by at least 15 min); a strategy must improve one and worsen neither of the first two.';
+/** A strategy qualifies against the baseline: it ranks above it and is worse on neither sleepiness at work nor alignment. */
+export function qualifiesByRule(s: RuleFigures, baseline: RuleFigures): boolean {
+  const g = gains(s, baseline);
+  return compareByRule(s, baseline) > 0 && g.kss > -KSS_SHARE_MARGIN + EPS && g.misalignment > -MISALIGNMENT_MARGIN_H + EPS;
+}
 
-export function recommend(personName: string, strategies: readonly Omit<StrategyResult, 'headlines'>[]): Recommendation {
+/** The recommended item: the best qualifying one by the ordered comparison, else the baseline. */
+export function pickByRule<T>(baseline: T, others: readonly T[], figures: (t: T) => RuleFigures): T {
+  const b = figures(baseline);
+  let best: T = baseline;
+  let bestF: RuleFigures | undefined;
+  for (const o of others) {
+    const f = figures(o);
+    if (!qualifiesByRule(f, b)) continue;
+    if (bestF === undefined || compareByRule(f, bestF) > 0) {
+      best = o;
+      bestF = f;
+    }
+  }
+  return best;
+}
+
+export const RECOMMENDATION_RULE =
+  'Compared with the baseline, in order: fewer work hours at KSS 7 or more (by at least 1 percentage point); ' +
+  'less misalignment between the body clock and the person’s work and sleep hours (by at least 15 min a day: work in the biological night, main sleep in the biological day, waking before the biological night is over); ' +
+  'then, only to break ties, less melatonin suppression per night (by at least 2 points) and more daytime hours at 250 lx melanopic EDI or more (by at least 15 min). ' +
+  'The first difference that reaches its margin decides; a strategy is recommended only when it ranks above the baseline and is worse on neither sleepiness at work nor alignment.';
+
+type RunOf = Omit<StrategyResult, 'headlines'>;
+
+/** Why the chosen strategy beats the baseline, in words, including a tie-breaker it worsens. */
+function reasonFor(personName: string, s: RunOf, base: RunOf): string {
+  const g = gains(ruleFiguresOf(s), ruleFiguresOf(base));
+  const parts: string[] = [];
+  if (g.kss >= KSS_SHARE_MARGIN - EPS) parts.push(`${Math.round(g.kss * 100)} percentage points fewer work hours at KSS 7 or more`);
+  if (g.misalignment >= MISALIGNMENT_MARGIN_H - EPS) parts.push(`${hm(g.misalignment)} a day less misalignment of ${personName}'s body clock with work and sleep hours`);
+  if (g.suppression >= SUPPRESSION_MARGIN_PCT - EPS) parts.push(`${Math.round(g.suppression)} points less melatonin suppression per night`);
+  if (g.daytime >= DAYTIME_MARGIN_H - EPS) parts.push(`${hm(g.daytime)} more daytime light at 250 lx melanopic EDI or more per day`);
+  const costs: string[] = [];
+  if (g.suppression <= -SUPPRESSION_MARGIN_PCT + EPS) costs.push(`melatonin suppression per night rises by ${Math.round(-g.suppression)} points`);
+  if (g.daytime <= -DAYTIME_MARGIN_H + EPS) costs.push(`daytime light at 250 lx melanopic EDI or more falls by ${hm(-g.daytime)} per day`);
+  const cost = costs.length === 0 ? '' : ` In exchange ${costs.join(' and ')}; the rule weighs these below sleepiness at work and alignment.`;
+  return `For ${personName}, "${s.name}" gives ${parts.join(', ')} than the baseline.${cost}`;
+}
+
+export function recommend(personName: string, strategies: readonly RunOf[]): Recommendation {
   const base = strategies.find((s) => s.is_baseline);
   if (base === undefined) throw new Error('no baseline among the strategies');
-  let best: { s: Omit<StrategyResult, 'headlines'>; g: Gains } | undefined;
-  for (const s of strategies) {
-    if (s.is_baseline) continue;
-    const g = gains(s.summary, base.summary);
-    const improves = g.kss >= KSS_SHARE_MARGIN || g.suppression >= SUPPRESSION_MARGIN_PCT || g.daytime >= DAYTIME_MARGIN_H;
-    const worsens = g.kss <= -KSS_SHARE_MARGIN || g.suppression <= -SUPPRESSION_MARGIN_PCT;
-    if (!improves || worsens) continue;
-    if (best === undefined || compare(g, best.g) > 0) best = { s, g };
+  const best = pickByRule(base, strategies.filter((s) => !s.is_baseline), ruleFiguresOf);
+  if (best === base) {
+    return {
+      strategy_id: base.id,
+      strategy_name: base.name,
+      rule: RECOMMENDATION_RULE,
+      reason: `No strategy improved on the baseline for ${personName} by the rule's margins without worsening sleepiness at work or the alignment of ${personName}'s body clock with work and sleep hours.`,
+    };
   }
-  if (best === undefined) {
-    return { strategy_id: base.id, strategy_name: base.name, rule: RECOMMENDATION_RULE, reason: `No strategy improved on the baseline for ${personName} by the rule's margins without worsening sleepiness at work or melatonin suppression.` };
-  }
-  const g = best.g;
-  const parts: string[] = [];
-  if (g.kss >= KSS_SHARE_MARGIN) parts.push(`${Math.round(g.kss * 100)} percentage points fewer work hours at KSS 7 or more`);
-  if (g.suppression >= SUPPRESSION_MARGIN_PCT) parts.push(`${Math.round(g.suppression)} points less melatonin suppression per night`);
-  if (g.daytime >= DAYTIME_MARGIN_H) parts.push(`${hm(g.daytime)} more daytime light at 250 lx melanopic EDI or more per day`);
-  return { strategy_id: best.s.id, strategy_name: best.s.name, rule: RECOMMENDATION_RULE, reason: `For ${personName}, "${best.s.name}" gives ${parts.join(', ')} than the baseline.` };
+  return { strategy_id: best.id, strategy_name: best.name, rule: RECOMMENDATION_RULE, reason: reasonFor(personName, best, base) };
 }
+

@@ -9,9 +9,10 @@
  *    so a clock change shows as a local-time jump with no lost or repeated interval.
  *  summary.csv — one row per persona × strategy with the summary metrics; beside each figure that
  *    has an ensemble range, its lowest and highest value across the models and the model count
- *    (empty without the ensemble).
+ *    (empty without the ensemble); then the alignment figures (alignment.ts; empty when not assessed).
  */
 import Papa from 'papaparse';
+import { ALIGNMENT_FIELDS } from './alignment.js';
 import { LIGHT_SOURCES } from './eye-series.js';
 import { ENSEMBLE_METRICS, type EnsembleMetric, type RunResults, type StrategySummary } from './results-types.js';
 import type { TimelineLight } from './run-scenario.js';
@@ -68,7 +69,7 @@ const SUMMARY_FIELDS = [
 const isEnsembleMetric = (f: string): f is EnsembleMetric => (ENSEMBLE_METRICS as readonly string[]).includes(f);
 
 export function summaryCsv(results: RunResults): string {
-  const header = ['persona_id', 'strategy_id', 'strategy_name', 'recommended', ...SUMMARY_FIELDS.flatMap((f) => (isEnsembleMetric(f) ? [f, `${f}_ensemble_min`, `${f}_ensemble_max`, `${f}_ensemble_models`] : [f]))];
+  const header = ['persona_id', 'strategy_id', 'strategy_name', 'recommended', ...SUMMARY_FIELDS.flatMap((f) => (isEnsembleMetric(f) ? [f, `${f}_ensemble_min`, `${f}_ensemble_max`, `${f}_ensemble_models`] : [f])), ...ALIGNMENT_FIELDS];
   const rows: (string | number | null)[][] = [];
   for (const p of results.personas) {
     for (const s of p.strategies) {
@@ -77,7 +78,8 @@ export function summaryCsv(results: RunResults): string {
         const e = s.ensemble?.[f];
         return [s.summary[f], e?.min ?? null, e?.max ?? null, e === undefined ? null : e.model_count];
       });
-      rows.push([p.id, s.id, s.name, p.recommendation.strategy_id === s.id ? 1 : 0, ...cells].map((v) => (v === null ? '' : v)));
+      const alignment = ALIGNMENT_FIELDS.map((f) => s.alignment?.[f] ?? null);
+      rows.push([p.id, s.id, s.name, p.recommendation.strategy_id === s.id ? 1 : 0, ...cells, ...alignment].map((v) => (v === null ? '' : v)));
     }
   }
   return Papa.unparse({ fields: header, data: rows }, { newline: '\n' }) + '\n';

@@ -5,6 +5,7 @@
  * offset at that moment. Light: melanopic EDI (CIE S 026) and photopic illuminance at the eye, lx.
  */
 import type { CohortSummary } from '../../model/cohort/aggregate-cohort.js';
+import type { AlignmentSummary } from './alignment.js';
 
 export const RESULTS_FORMAT = 'zeitlight-results';
 export const RESULTS_FORMAT_VERSION = 1;
@@ -140,6 +141,8 @@ export interface StrategyResult {
   readonly sleep_episodes: readonly { readonly start: EventTime; readonly end: EventTime; readonly duration_h: number }[];
   readonly melatonin_nights: readonly { readonly onset: EventTime; readonly end_h: number; readonly suppression_pct: number | null }[];
   readonly solver: { readonly light_segments: number; readonly rhs_evaluations: number };
+  /** Alignment of the body clock with the person's work and sleep hours, mean over the run (alignment.ts); null without a body-clock minimum. */
+  readonly alignment: AlignmentSummary | null;
   /** Ranges of the headline and sleep-timing figures across the model ensemble (absent without it). */
   readonly ensemble?: StrategyEnsemble;
 }

@@ -155,7 +155,7 @@ export function runScenario(input: RunInput): RunOutput {
     const base = runs.find((r) => r.is_baseline);
     if (base === undefined) continue;
     const shortName = persona.name.replace(/\s*\([^)]*\)\s*$/, '');
-    const strategies: StrategyResult[] = runs.map((r) => ({ ...r, headlines: headlines(shortName, r.summary, base.summary, r.name, r.is_baseline) }));
+    const strategies: StrategyResult[] = runs.map((r) => ({ ...r, headlines: headlines(shortName, r, base, r.name, r.is_baseline) }));
     personas.push({ id: persona.id, name: persona.name, age_y: persona.age_y, sleep_mode: persona.sleep.mode, strategies, recommendation: recommend(shortName, runs) });
   }
 
