@@ -1,23 +1,31 @@
-// The three numbers of the summary, per persona and strategy, and the recommended strategy.
+// The summary numbers per persona and strategy, and the recommended strategy.
 //  - Phase shift vs baseline: DLMO on the last day both runs have it, hours, positive = advance
 //    (earlier), as in the Body clock view (renderer/src/charts/phase-data.ts).
+//  - Alignment: misalignment of the body clock with the person's work and sleep hours, hours per
+//    day (schedules/run/alignment.ts): the results' own figures, or for a view without them
+//    (layout checks) the same measure on the view's markers, sleep and work minutes.
 //  - Evening melatonin suppression: the run's suppression metric (% vs the same night in dim
 //    light; docs/methods/circadian.md §5.1).
 //  - Share of work hours at KSS ≥ 7: hours weighted by the minutes spent at work in them; awake
 //    hours are used when the scenario has no work in it (said so in the sentence).
-// Recommendation rule (ours, stated in the report): the lowest share of sleepy work hours; within
-// half a percentage point, the lower evening suppression; the baseline stays recommended unless
-// a strategy does better on one of the two without being worse on the other.
+// Recommendation: the pipeline's own, quoted with its sentences and rule when the view carries
+// it (the app); otherwise the pipeline's rule (schedules/run/recommend.ts) on the numbers the view
+// has. Shift sentences come from schedules/run/phase-words.ts.
 import type { NamedItem, ResultsView, RunView } from '../../src/results/view-model.js';
 import { phaseShiftVsBaseline_h } from '../../src/charts/phase-data.js';
 import { KSS_SLEEPY_THRESHOLD } from '../../src/charts/kss-grid-data.js';
 import { formatNumber } from '../../src/charts/comparison-data.js';
+import { alignmentSummary, type AlignmentSummary } from '../../../schedules/run/alignment.js';
+import { baselineAlignmentSentence, lastDayShiftSentence, shortPersonName } from '../../../schedules/run/phase-words.js';
+import { compareByRule, pickByRule, RECOMMENDATION_RULE, type RuleFigures } from '../../../schedules/run/recommend.js';
 
 export interface StrategyHeadline {
   readonly strategy: NamedItem;
   readonly phaseShift_h: number | null;
   readonly suppression_pct: number | null;
   readonly sleepyShare_pct: number | null;
+  /** Alignment with the person's work and sleep hours; null when it could not be assessed. */
+  readonly alignment: AlignmentSummary | null;
 }
 
 export interface PersonaSummary {
@@ -33,12 +41,9 @@ export interface PersonaSummary {
   readonly phaseMarker: 'DLMO' | 'CBTmin';
 }
 
-export const BRIEFING_RECOMMENDATION_RULE =
-  'The strategy with the lowest share of sleepy work hours (KSS ≥ 7); within half a percentage point, the one with less evening melatonin suppression. A strategy is recommended over the baseline only when it is better on one of these two and not worse on the other.';
-
 const SUPPRESSION_IDS = ['evening-suppression', 'melatonin-suppression', 'suppression', 'melatonin_suppression_pct'];
-/** Equal within this many percentage points (the numbers are shown to whole percent). */
-const TIE_PP = 0.5;
+/** DLMO = CBTmin − 7 h where a view gives CBTmin without DLMO (model/circadian marker convention). */
+const VIEW_DLMO_BEFORE_CBTMIN_H = 7;
 
 export function suppressionOf(run: RunView): number | null {
   for (const id of SUPPRESSION_IDS) {
@@ -65,44 +70,41 @@ function hasWork(weights: readonly number[] | undefined): weights is readonly nu
   return weights !== undefined && weights.some((w) => w > 0);
 }
 
-function lessOrEqual(a: number | null, b: number | null): boolean {
-  return a === null || b === null || a <= b + TIE_PP;
+/** Alignment from a view's markers, main sleep (episodes of kind "sleep") and work minutes per hour (taken from the start of each hour). */
+export function viewAlignment(run: RunView, workMinutesPerHour: readonly number[], days: number): AlignmentSummary | null {
+  return alignmentSummary({
+    from_h: 0,
+    to_h: 24 * days,
+    days,
+    work: workMinutesPerHour.flatMap((w, h) => (w > 0 ? [{ start_h: h, end_h: h + Math.min(60, w) / 60 }] : [])),
+    sleep: run.sleep.filter((e) => e.kind === 'sleep'),
+    mainSleepMin_h: 0,
+    dlmo_h: run.phases.flatMap((p) => (p.dlmo_h === null ? [] : [p.dlmo_h])),
+    cbtmin_h: run.phases.flatMap((p) => (p.cbtmin_h === null ? [] : [p.cbtmin_h])),
+    fallbackDlmoBeforeCbtmin_h: VIEW_DLMO_BEFORE_CBTMIN_H,
+  });
 }
 
-function strictlyLess(a: number | null, b: number | null): boolean {
-  return a !== null && b !== null && a < b - TIE_PP;
+/** The figures the recommendation rule compares (no daytime-light figure in a view). */
+export function ruleFigures(h: StrategyHeadline): RuleFigures {
+  return { sleepyWorkShare: h.sleepyShare_pct === null ? null : h.sleepyShare_pct / 100, misalignment_h_per_day: h.alignment?.misalignment_h_per_day ?? null, suppression_pct: h.suppression_pct, daytime_h_ge_250_lx: null };
 }
 
-/** Does `a` do better than `b`: better on one of the two scored numbers and not worse on the other. */
-export function dominates(a: StrategyHeadline, b: StrategyHeadline): boolean {
-  const better = strictlyLess(a.sleepyShare_pct, b.sleepyShare_pct) || strictlyLess(a.suppression_pct, b.suppression_pct);
-  return better && lessOrEqual(a.sleepyShare_pct, b.sleepyShare_pct) && lessOrEqual(a.suppression_pct, b.suppression_pct);
-}
-
-/** Lexicographic order: lower sleepy share first, then lower suppression. */
-function ranksBefore(a: StrategyHeadline, b: StrategyHeadline): boolean {
-  if (strictlyLess(a.sleepyShare_pct, b.sleepyShare_pct)) return true;
-  if (strictlyLess(b.sleepyShare_pct, a.sleepyShare_pct)) return false;
-  return strictlyLess(a.suppression_pct, b.suppression_pct);
-}
-
+/** The pipeline's rule (schedules/run/recommend.ts) on the view's numbers; without a baseline, the best by its ordered comparison. */
 export function pickRecommended(baseline: StrategyHeadline | null, others: readonly StrategyHeadline[]): StrategyHeadline | null {
-  const candidates = baseline === null ? others : others.filter((o) => dominates(o, baseline));
-  let best = baseline ?? candidates[0] ?? null;
-  for (const c of candidates) if (best === null || ranksBefore(c, best)) best = c;
+  if (baseline !== null) return pickByRule(baseline, others, ruleFigures);
+  let best: StrategyHeadline | null = null;
+  for (const o of others) if (best === null || compareByRule(ruleFigures(o), ruleFigures(best)) > 0) best = o;
   return best;
 }
 
 const pct = (v: number | null) => (v === null ? 'not available' : `${formatNumber(v, 0)} %`);
 
-function phaseSentence(persona: string, rec: StrategyHeadline | null, isBaseline: boolean): string {
-  if (rec === null || isBaseline) return `Phase shift: the baseline is the reference, so there is no shift to report for ${persona}.`;
-  const s = rec.phaseShift_h;
-  if (s === null) return `Phase shift: no day with a melatonin onset in both runs, so no shift can be given.`;
-  if (Math.abs(s) < 0.05) return `Phase shift: with “${rec.strategy.name}” ${persona}'s body clock keeps the baseline timing (no shift).`;
-  return s > 0
-    ? `Phase shift: with “${rec.strategy.name}” ${persona}'s body clock runs ${formatNumber(s, 1)} h earlier than with the baseline by the last day (an advance: earlier sleepiness in the evening, easier early mornings).`
-    : `Phase shift: with “${rec.strategy.name}” ${persona}'s body clock runs ${formatNumber(-s, 1)} h later than with the baseline by the last day (a delay: later sleepiness, harder early mornings).`;
+function phaseSentence(person: string, rec: StrategyHeadline | null, base: StrategyHeadline | null, isBaseline: boolean): string {
+  if (rec === null) return 'Phase shift: not available from these results.';
+  if (isBaseline) return `Phase shift: the baseline is the reference, so there is no shift to report for ${person}. ${baselineAlignmentSentence(person, rec.alignment)}`;
+  const later = rec.phaseShift_h === null ? null : -rec.phaseShift_h;
+  return `Phase shift: ${lastDayShiftSentence(person, rec.strategy.name, 'DLMO', later, rec.alignment, base?.alignment)}`;
 }
 
 function suppressionSentence(rec: StrategyHeadline | null, base: StrategyHeadline | null, isBaseline: boolean): string {
@@ -121,6 +123,7 @@ function sleepinessSentence(rec: StrategyHeadline | null, base: StrategyHeadline
 /** Summary for every persona of the view. `workMinutesPerHour` is keyed "persona:strategy". */
 export function personaSummaries(view: ResultsView, workMinutesPerHour: ReadonlyMap<string, readonly number[]>): PersonaSummary[] {
   return view.personas.map((persona) => {
+    const person = shortPersonName(persona.name);
     const runs = view.strategies.map((s) => ({ strategy: s, run: view.runs.find((r) => r.personaId === persona.id && r.strategyId === s.id) })).filter((x): x is { strategy: NamedItem; run: RunView } => x.run !== undefined);
     const baselineRun = runs.find((x) => x.strategy.id === view.baselineId)?.run;
     const basis = runs.some((x) => hasWork(workMinutesPerHour.get(`${persona.id}:${x.strategy.id}`))) ? 'work' : 'awake';
@@ -131,16 +134,20 @@ export function personaSummaries(view: ResultsView, workMinutesPerHour: Readonly
         phaseShift_h: baselineRun === undefined || strategy.id === view.baselineId ? (strategy.id === view.baselineId ? 0 : null) : phaseShiftVsBaseline_h(run, baselineRun, 'dlmo'),
         suppression_pct: suppressionOf(run),
         sleepyShare_pct: sleepyShare_pct(run.kssHourly, basis === 'work' ? (hasWork(weights) ? weights : []) : null),
+        alignment: run.alignment !== undefined ? run.alignment : viewAlignment(run, hasWork(weights) ? weights : [], view.days),
       };
     });
     const baseline = all.find((h) => h.strategy.id === view.baselineId) ?? null;
-    const recommended = pickRecommended(baseline, all.filter((h) => h !== baseline));
+    const piped = view.recommendations?.find((r) => r.personaId === persona.id);
+    const recommended = piped !== undefined ? (all.find((h) => h.strategy.id === piped.strategyId) ?? baseline) : pickRecommended(baseline, all.filter((h) => h !== baseline));
     const isBaseline = recommended !== null && recommended === baseline;
     const recommendation =
       recommended === null
         ? `No results for ${persona.name}.`
         : isBaseline
-          ? `Recommended: keep the baseline — no strategy lowered sleepy ${basis} hours or evening melatonin suppression without making the other worse.`
+          ? piped !== undefined
+            ? 'Recommended: keep the baseline.'
+            : `Recommended: keep the baseline — no strategy lowered sleepy ${basis} hours or the misalignment with ${person}'s work and sleep hours without making the other worse.`
           : `Recommended: “${recommended.strategy.name}”.`;
     return {
       persona,
@@ -148,14 +155,14 @@ export function personaSummaries(view: ResultsView, workMinutesPerHour: Readonly
       baseline,
       recommended,
       all,
-      rule: BRIEFING_RECOMMENDATION_RULE,
+      rule: piped?.rule ?? RECOMMENDATION_RULE,
       phaseMarker: 'DLMO',
       sentences: {
         recommendation,
-        reason: '',
-        phase: phaseSentence(persona.name, recommended, isBaseline),
-        suppression: suppressionSentence(recommended, baseline, isBaseline),
-        sleepiness: sleepinessSentence(recommended, baseline, isBaseline, basis),
+        reason: piped?.reason ?? '',
+        phase: piped?.sentences?.phase ?? phaseSentence(person, recommended, baseline, isBaseline),
+        suppression: piped?.sentences?.suppression ?? suppressionSentence(recommended, baseline, isBaseline),
+        sleepiness: piped?.sentences?.sleepiness ?? sleepinessSentence(recommended, baseline, isBaseline, basis),
       },
     };
   });

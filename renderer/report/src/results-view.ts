@@ -57,6 +57,7 @@ function metricsOf(s: StrategyResult): MetricValue[] {
     metric('work-kss7-share', 'Work hours at KSS ≥ 7', '%', m.work_hours_kss_ge_7_share === null ? null : m.work_hours_kss_ge_7_share * 100, 0, 'lower'),
     metric('suppression', 'Melatonin suppression per night (mean)', '%', m.mean_melatonin_suppression_pct, 0, 'lower'),
     metric('phase-shift', 'Body-clock shift vs baseline (CBTmin, last days)', 'h', m.mean_phase_shift_h, 2, 'none', 'later', 'earlier'),
+    metric('misalignment', 'Misalignment with work and sleep hours (per day)', 'h', s.alignment?.misalignment_h_per_day ?? null, 1, 'lower', 'more', 'less'),
     metric('daytime-250', 'Daytime hours ≥ 250 lx melanopic EDI (per day)', 'h', m.mean_daytime_hours_ge_250_lx, 1, 'higher'),
     metric('mel-dose', 'Melanopic dose (per day)', 'lx·h', m.mean_mel_dose_lx_h, 0, 'higher'),
     metric('pre-sleep', 'Melanopic EDI before sleep (mean)', 'lx', m.mean_pre_sleep_mel_edi_lx, 1, 'lower'),
@@ -122,6 +123,8 @@ export function summariesFromResults(results: RunResults): PersonaSummary[] {
       phaseShift_h: s.is_baseline ? 0 : s.summary.mean_phase_shift_h === null ? null : -s.summary.mean_phase_shift_h,
       suppression_pct: s.summary.mean_melatonin_suppression_pct,
       sleepyShare_pct: s.summary.work_hours_kss_ge_7_share === null ? null : s.summary.work_hours_kss_ge_7_share * 100,
+      // Absent in results written before the alignment figures existed.
+      alignment: s.alignment ?? null,
     }));
     const baseline = all.find((h) => p.strategies.find((s) => s.id === h.strategy.id)?.is_baseline === true) ?? null;
     const recommended = all.find((h) => h.strategy.id === p.recommendation.strategy_id) ?? baseline;

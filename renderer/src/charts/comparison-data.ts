@@ -27,15 +27,16 @@ export function formatNumber(value: number | null, decimals: number): string {
   return /^-0(\.0*)?$/.test(text) ? text.slice(1) : text;
 }
 
-function readingFor(metric: MetricValue, difference: number, strategyName: string): { verdict: ComparisonCell['verdict']; reading: string } {
+function readingFor(metric: MetricValue, difference: number, strategyName: string, note: string | undefined): { verdict: ComparisonCell['verdict']; reading: string } {
   const threshold = 0.5 * 10 ** -metric.decimals;
-  if (Math.abs(difference) < threshold) return { verdict: 'same', reading: `${metric.label}: no change with ${strategyName}.` };
+  const tail = note === undefined ? '' : ` — ${note}`;
+  if (Math.abs(difference) < threshold) return { verdict: 'same', reading: `${metric.label}: no change with ${strategyName}${tail}.` };
   const up = difference > 0;
   const amount = `${formatNumber(Math.abs(difference), metric.decimals)}${metric.unit === '' ? '' : ` ${metric.unit}`}`;
   const word = up ? metric.increaseWord : metric.decreaseWord;
   const verdict = metric.better === 'none' ? 'neutral' : (metric.better === 'higher') === up ? 'better' : 'worse';
   const judgement = verdict === 'better' ? ' (favourable)' : verdict === 'worse' ? ' (unfavourable)' : '';
-  return { verdict, reading: `${metric.label} ${amount} ${word} than baseline with ${strategyName}${judgement}.` };
+  return { verdict, reading: `${metric.label} ${amount} ${word} than baseline with ${strategyName}${judgement}${tail}.` };
 }
 
 export function comparisonRows(runs: readonly RunView[], strategies: readonly NamedItem[], baselineId: string): ComparisonRow[] {
@@ -54,7 +55,7 @@ export function comparisonRows(runs: readonly RunView[], strategies: readonly Na
       if (strategy.id === baselineId) return { strategyId: strategy.id, value, difference: null, verdict: 'neutral', reading: 'Baseline.', ...ensemble };
       if (value === null || metric.value === null) return { strategyId: strategy.id, value, difference: null, verdict: 'unknown', reading: `${metric.label}: not available.`, ...ensemble };
       const difference = value - metric.value;
-      return { strategyId: strategy.id, value, difference, ...readingFor(metric, difference, strategy.name), ...ensemble };
+      return { strategyId: strategy.id, value, difference, ...readingFor(metric, difference, strategy.name, own?.note), ...ensemble };
     }),
   }));
 }

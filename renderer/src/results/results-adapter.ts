@@ -3,6 +3,7 @@
 // renderer's ResultsView. When the results format changes, only this file changes.
 import type { Scenario } from '../../../schedules/schema/scenario-types.js';
 import { runScenario, RunInputError, RUN_CAUTION, type RunOutput, type StrategyResult, type TimelineLight } from '../../../schedules/run/index.js';
+import { alignmentClause, shortPersonName } from '../../../schedules/run/phase-words.js';
 import type { LightSourceSeries, MetricValue, ResultsView, RunView, SourceKind } from './view-model.js';
 import { viewEnsembleFromResults, withViewEnsemble } from './ensemble-view.js';
 
@@ -64,6 +65,7 @@ function metricsOf(s: StrategyResult): MetricValue[] {
     metric('dlmo', 'DLMO (last day, local clock)', 'h', lastDayClock(s.days, 'dlmo_local', true), 2, 'none', 'later', 'earlier'),
     metric('cbtmin', 'CBTmin (last day, local clock)', 'h', lastDayClock(s.days, 'cbtmin_local', false), 2, 'none', 'later', 'earlier'),
     metric('phase-shift', 'Body-clock shift vs baseline (last 7 days)', 'h', m.mean_phase_shift_h, 2, 'none', 'later', 'earlier'),
+    metric('misalignment', 'Misalignment with work and sleep hours (mean per day)', 'h', s.alignment?.misalignment_h_per_day ?? null, 1, 'lower', 'more', 'less'),
     metric('day-above-250', 'Daytime hours ≥ 250 lx mEDI (mean per day)', 'h', m.mean_daytime_hours_ge_250_lx, 1, 'higher', 'more', 'fewer'),
     metric('pre-sleep', 'Light in the 3 h before sleep (mean mEDI)', 'lx', m.mean_pre_sleep_mel_edi_lx, 1, 'lower'),
     metric('suppression', 'Melatonin suppression per night', '%', m.mean_melatonin_suppression_pct, 1, 'lower'),
@@ -74,7 +76,10 @@ function metricsOf(s: StrategyResult): MetricValue[] {
   ];
 }
 
-function runView(tl: TimelineLight, s: StrategyResult): RunView {
+/** Metrics whose comparison reading is a body-clock shift: they say whether it moves toward alignment. */
+const PHASE_METRIC_IDS: readonly string[] = ['dlmo', 'cbtmin', 'phase-shift'];
+
+function runView(tl: TimelineLight, s: StrategyResult, phaseNote?: string): RunView {
   const sources: LightSourceSeries[] = (Object.keys(SOURCE_LABELS) as (keyof typeof SOURCE_LABELS)[])
     .filter((k) => k !== 'measured' || tl.eye.melBySource.measured.some((v) => v > 0))
     .map((k) => ({ id: k, label: SOURCE_LABELS[k], kind: k, mel_edi_lx: means(tl.eye.melBySource[k], VIEW_LIGHT_STEP_MIN) }));
@@ -87,8 +92,15 @@ function runView(tl: TimelineLight, s: StrategyResult): RunView {
     melatonin: { time_h: tl.melatonin.t_h.slice(0, n), level: tl.melatonin.plasma_pmol_L.slice(0, n), unsuppressed: tl.melatonin.dim_pmol_L.slice(0, n), unit: 'pmol/L' },
     kssHourly: s.hourly.kss,
     sleep: s.sleep_episodes.map((e) => ({ start_h: e.start.t_h, end_h: e.end.t_h, kind: e.duration_h < 3 ? 'nap' : 'sleep' })),
-    metrics: metricsOf(s),
+    metrics: metricsOf(s).map((m) => (phaseNote !== undefined && PHASE_METRIC_IDS.includes(m.id) ? { ...m, note: phaseNote } : m)),
+    alignment: s.alignment,
   };
+}
+
+/** The recommended strategy's headline sentences by topic. */
+function recommendedSentences(s: StrategyResult | undefined): { phase: string; suppression: string; sleepiness: string } {
+  const of = (metric: string) => s?.headlines.find((h) => h.metric === metric)?.sentence ?? 'Not available from these results.';
+  return { phase: of('phase_shift_h'), suppression: of('melatonin_suppression_pct'), sleepiness: of('work_hours_kss_ge_7_share') };
 }
 
 /** Maps a pipeline run to the results views' model. */
@@ -98,7 +110,8 @@ export function viewFromRun(out: RunOutput, scenario: Scenario): ResultsView {
   for (const p of r.personas) {
     for (const s of p.strategies) {
       const tl = out.light.find((l) => l.personaId === p.id && l.strategyId === s.id);
-      if (tl !== undefined) runs.push(runView(tl, s));
+      const base = p.strategies.find((x) => x.is_baseline);
+      if (tl !== undefined) runs.push(runView(tl, s, s.is_baseline ? undefined : alignmentClause(shortPersonName(p.name), s.alignment, base?.alignment)));
     }
   }
   const view: ResultsView = {
@@ -115,6 +128,8 @@ export function viewFromRun(out: RunOutput, scenario: Scenario): ResultsView {
       strategyId: p.recommendation.strategy_id,
       reason: p.recommendation.reason,
       headlines: p.strategies.find((s) => s.id === p.recommendation.strategy_id)?.headlines.map((h) => h.sentence) ?? [],
+      rule: p.recommendation.rule,
+      sentences: recommendedSentences(p.strategies.find((s) => s.id === p.recommendation.strategy_id)),
     })),
   };
   const ensemble = viewEnsembleFromResults(r);

@@ -2,6 +2,7 @@
 // one module that fills them from the run pipeline's results, so a change of the results
 // format touches that file only. Times are hours since t = 0 (local midnight of day 0 at the
 // site), as in the CLI contract.
+import type { AlignmentSummary } from '../../../schedules/run/alignment.js';
 
 export type SourceKind = 'daylight' | 'electric' | 'screen' | 'outdoor' | 'measured' | 'other';
 
@@ -53,6 +54,8 @@ export interface MetricValue {
   /** Words for an increase and a decrease, e.g. "later" / "earlier" for a clock time. */
   readonly increaseWord: string;
   readonly decreaseWord: string;
+  /** Appended to the comparison reading of this strategy, e.g. whether a body-clock shift moves toward alignment (schedules/run/phase-words.ts). */
+  readonly note?: string;
   /** The same figure across the model ensemble, in the metric's unit, once the ensemble has run. */
   readonly ensemble?: MetricEnsemble;
 }
@@ -84,6 +87,8 @@ export interface RunView {
   readonly kssHourly: readonly (number | null)[];
   readonly sleep: readonly Episode[];
   readonly metrics: readonly MetricValue[];
+  /** Alignment of the body clock with the person's work and sleep hours (results.json `alignment`); absent in synthetic views. */
+  readonly alignment?: AlignmentSummary | null;
 }
 
 export interface NamedItem {
@@ -113,6 +118,10 @@ export interface Recommendation {
   readonly strategyId: string;
   readonly reason: string;
   readonly headlines: readonly string[];
+  /** The rule the pipeline recommended by, in words. */
+  readonly rule?: string;
+  /** The recommended strategy's headline sentences by topic. */
+  readonly sentences?: { readonly phase: string; readonly suppression: string; readonly sleepiness: string };
 }
 
 export function findRun(view: ResultsView, personaId: string, strategyId: string): RunView | undefined {

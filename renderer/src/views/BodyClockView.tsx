@@ -1,4 +1,5 @@
-// Body clock: DLMO or CBTmin clock time day by day for each strategy.
+// Body clock: DLMO or CBTmin clock time day by day for each strategy, and each strategy's shift on
+// the last day with whether it moves the body clock toward alignment with work and sleep hours.
 import { useState } from 'react';
 import { CartesianGrid, Legend, Line, LineChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import type { ResultsView } from '../results/view-model.js';
@@ -6,6 +7,7 @@ import { findRun } from '../results/view-model.js';
 import { phaseByDayRows, phaseKey, phaseShiftVsBaseline_h, type PhaseMarker } from '../charts/phase-data.js';
 import { seriesColour, seriesDash } from '../charts/palette.js';
 import { clockAxis, formatClock, formatDayLabel } from '../charts/clock.js';
+import { lastDayShiftReading, shortPersonName } from '../../../schedules/run/phase-words.js';
 
 export function BodyClockView({ view, personaId }: { view: ResultsView; personaId: string }) {
   const [marker, setMarker] = useState<PhaseMarker>('dlmo');
@@ -13,6 +15,7 @@ export function BodyClockView({ view, personaId }: { view: ResultsView; personaI
   const strategies = view.strategies.filter((s) => runs.some((r) => r.strategyId === s.id));
   const rows = phaseByDayRows(runs, strategies, view.days, marker);
   const baseline = findRun(view, personaId, view.baselineId);
+  const person = shortPersonName(view.personas.find((p) => p.id === personaId)?.name ?? personaId);
   const axis = clockAxis(rows.flatMap((r) => strategies.map((st) => r[phaseKey(st.id, marker)])));
   return (
     <div className="chart-block">
@@ -49,7 +52,7 @@ export function BodyClockView({ view, personaId }: { view: ResultsView; personaI
               return (
                 <li key={r.strategyId}>
                   {name}:{' '}
-                  {shift === null ? 'no common day to compare' : Math.abs(shift) < 0.05 ? 'no shift versus baseline' : `${Math.abs(shift).toFixed(1)} h ${shift > 0 ? 'earlier (advance)' : 'later (delay)'} than baseline on the last day`}
+                  {lastDayShiftReading(shift === null ? null : -shift, person, r.alignment, baseline.alignment)}
                 </li>
               );
             })}

@@ -9,6 +9,7 @@ import type { ScenarioFacts } from '../scenario-facts.js';
 import type { ValidationRecordSummary } from '../validation-summary.js';
 import { RESULTS_CAUTIONS } from '../../../src/results/cautions.js';
 import { formatNumber } from '../../../src/charts/comparison-data.js';
+import { alignmentTag, directionOf } from '../../../../schedules/run/phase-words.js';
 import { EnsembleMethods } from './EnsembleMethods.js';
 import { MODELS, NOT_MODELLED, UNIT_NOTES } from '../methods-text.js';
 import { TimelineDrawing } from './TimelineDrawing.js';
@@ -81,8 +82,10 @@ function HeadlineTable({ summary }: { summary: PersonaSummary }) {
     <table className="data keep">
       <thead>
         <tr>
-          <th>Strategy</th>
+          {/* a wide first column keeps strategy names on few lines next to four number columns */}
+          <th style={{ width: '34%' }}>Strategy</th>
           <th className="num">Body-clock shift vs baseline ({summary.phaseMarker})</th>
+          <th className="num">Misalignment with work and sleep (h a day)</th>
           <th className="num">Melatonin suppression per night</th>
           <th className="num">{summary.basis === 'work' ? 'Work hours' : 'Waking hours'} at KSS ≥ 7</th>
         </tr>
@@ -94,7 +97,18 @@ function HeadlineTable({ summary }: { summary: PersonaSummary }) {
               {h.strategy.name}
               {isRec(h) && <span className="tag">recommended</span>}
             </td>
-            <td className="num">{h === summary.baseline ? 'reference' : shiftWords(h.phaseShift_h)}</td>
+            <td className="num">
+              {h === summary.baseline ? (
+                'reference'
+              ) : (
+                <>
+                  {shiftWords(h.phaseShift_h)}
+                  <br />
+                  <span className="small">{alignmentTag(directionOf(h.alignment, summary.baseline?.alignment))}</span>
+                </>
+              )}
+            </td>
+            <td className="num">{h.alignment === null ? '—' : formatNumber(h.alignment.misalignment_h_per_day, 1)}</td>
             <td className="num">{percent(h.suppression_pct)}</td>
             <td className="num">{percent(h.sleepyShare_pct)}</td>
           </tr>
@@ -123,7 +137,7 @@ export function Summary({ summaries, warnings }: { summaries: readonly PersonaSu
           <HeadlineTable summary={s} />
         </div>
       ))}
-      <p className="small muted">How the recommendation is chosen: {summaries[0]?.rule ?? ''} Body-clock shifts are reported, not scored: whether earlier or later is better depends on the person’s hours.</p>
+      <p className="small muted">How the recommendation is chosen: {summaries[0]?.rule ?? ''} A body-clock shift is judged by whether it moves the clock toward or away from alignment with the person’s work and sleep hours (misalignment: hours a day of work in the biological night, main sleep in the biological day and waking before the biological night is over; biological night from DLMO to 2 h after CBTmin).</p>
       {warnings.length > 0 && (
         <div className="keep">
           <h4>Notes from the run</h4>
