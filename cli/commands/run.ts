@@ -28,6 +28,13 @@ export function externalInputs(scenario: Scenario, scenarioFile: string): Pick<R
   return { ...(weather !== undefined ? { weather } : {}), lightLogTexts };
 }
 
+/** Every file the run reads: the scenario, its weather file and its light logs. */
+function inputFilesOf(scenario: Scenario, scenarioFile: string): string[] {
+  const base = dirname(resolve(scenarioFile));
+  const w = scenario.site.weather;
+  return [resolve(scenarioFile), ...(w.kind === 'file' ? [resolve(base, w.file)] : []), ...scenario.lightLogs.map((l) => resolve(base, l.file))];
+}
+
 export function validatedScenario(text: string, file: string): Scenario {
   const v = validateScenarioText(text);
   if (v.scenario === undefined || !v.ok) {
@@ -98,6 +105,7 @@ export const runCommand: Command = {
       paper: paperOption(ctx),
       ...(chromium !== undefined ? { chromiumPath: chromium } : {}),
       scenarioForReport: JSON.parse(text) as unknown,
+      inputFiles: inputFilesOf(scenario, file),
       ...(cohort !== undefined ? { cohort } : {}),
     });
     return 0;

@@ -1,7 +1,8 @@
 /**
  * Shared by `zeitlight run` and `zeitlight demo`: run the pipeline on a validated scenario,
  * write results.json, exposure.csv and summary.csv (and the scenario itself for the demo),
- * optionally the PDF briefing, and report what was written.
+ * optionally the PDF briefing, and report what was written. The output folder is checked before
+ * any work and receives the whole set of files at once (output-folder.ts).
  */
 import { HEALTH_CAUTION, printJson } from '../output.js';
 import type { CommandContext } from '../command.js';
@@ -9,7 +10,7 @@ import { CliError } from '../cli-error.js';
 import type { Scenario } from '../../schedules/index.js';
 import { exposureCsv, runScenario, RunInputError, summaryCsv, withEnsemble, type RunInput, type RunResults } from '../../schedules/run/index.js';
 import { ensembleLines, ensembleModelsLine } from './ensemble-lines.js';
-import { prepareOutputFolder, writeFilesAtomically } from './output-folder.js';
+import { beginOutput, type StagedOutput } from './output-folder.js';
 import { writeBriefing } from './briefing-pdf.js';
 import { COHORT_STOP_RULE, runCohorts } from './cohort-runs.js';
 
@@ -25,6 +26,8 @@ export interface RunAndWriteOptions {
   readonly scenarioForReport: unknown;
   /** Also run the model ensemble and give every headline its range (schedules/run/ensemble.ts). */
   readonly ensemble: boolean;
+  /** Files the run reads (scenario, weather, light logs): the output folder must not hold them. */
+  readonly inputFiles?: readonly string[];
   /** Also run a cohort of virtual occupants per persona. */
   readonly cohort?: { readonly size: number; readonly seed: number; readonly workers?: number; readonly untilStable?: boolean };
 }
@@ -38,14 +41,29 @@ function runOrExplain(input: RunInput): ReturnType<typeof runScenario> {
   }
 }
 
-export async function runAndWrite(ctx: CommandContext, o: RunAndWriteOptions): Promise<RunResults> {
-  prepareOutputFolder(o.outDir, o.force);
-  const t0 = performance.now();
+/** The single run, with exposure.csv made at once so the per-minute light can go before a cohort starts. */
+function singleRun(o: RunAndWriteOptions): { results: RunResults; exposure: string; ensemble_ms: number } {
   const single = runOrExplain(o.input);
-  let results: RunResults = single.results;
   const tEnsemble = performance.now();
-  if (o.ensemble) results = withEnsemble(single);
+  const results = o.ensemble ? withEnsemble(single) : single.results;
   const ensemble_ms = performance.now() - tEnsemble;
+  return { results, exposure: exposureCsv(single.light, single.clock), ensemble_ms };
+}
+
+export async function runAndWrite(ctx: CommandContext, o: RunAndWriteOptions): Promise<RunResults> {
+  const output = beginOutput(o.outDir, { force: o.force, ...(o.inputFiles !== undefined ? { inputFiles: o.inputFiles } : {}) });
+  try {
+    return await runInto(ctx, o, output);
+  } finally {
+    output.abandon();
+  }
+}
+
+async function runInto(ctx: CommandContext, o: RunAndWriteOptions, output: StagedOutput): Promise<RunResults> {
+  const t0 = performance.now();
+  const first = singleRun(o);
+  let results: RunResults = first.results;
+  const ensemble_ms = first.ensemble_ms;
   if (o.cohort !== undefined) {
     const cohort = await runCohorts(o.input, o.cohort.size, o.cohort.seed, {
       ...(o.cohort.workers !== undefined ? { workers: o.cohort.workers } : {}),
@@ -55,24 +73,23 @@ export async function runAndWrite(ctx: CommandContext, o: RunAndWriteOptions): P
     if (!ctx.json) ctx.stderr('\n');
     results = { ...results, cohort };
   }
-  const out = { ...single, results };
+  const out = { results };
   const compute_ms = performance.now() - t0;
-  const files: Record<string, string> = {
+  output.write({
     'results.json': JSON.stringify(out.results, null, 1) + '\n',
-    'exposure.csv': exposureCsv(out.light, out.clock),
+    'exposure.csv': first.exposure,
     'summary.csv': summaryCsv(out.results),
     ...(o.extraFiles ?? {}),
-  };
-  const written = writeFilesAtomically(o.outDir, files);
+  });
   let pdfNote: string | undefined;
   if (o.pdf) {
-    const r = await writeBriefing(o.outDir, out.results, o.scenarioForReport, o.chromiumPath, o.paper);
-    if (r.ok) written.push(r.path);
-    else {
+    const r = await writeBriefing(output.staging, out.results, o.scenarioForReport, o.chromiumPath, o.paper);
+    if (!r.ok) {
       pdfNote = r.message;
       ctx.stderr(`zeitlight: ${r.message}\n`);
     }
   }
+  const written = output.commit();
   if (ctx.json) printJson(ctx, out.results);
   else {
     const lines = [`Ran "${out.results.scenario.name}": ${out.results.personas.length} person(s), ${out.results.scenario.days} days, in ${(compute_ms / 1000).toFixed(2)} s${o.ensemble ? ` (model ensemble ${(ensemble_ms / 1000).toFixed(2)} s)` : ''}.`];

@@ -3,7 +3,7 @@
  * refusal of a folder holding other files, --force, no half-written files, and clear messages
  * for bad input (invalid scenario, missing weather file, missing --out).
  */
-import { existsSync, mkdtempSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, test } from 'vitest';
@@ -41,16 +41,38 @@ describe('zeitlight run', () => {
     expect(JSON.parse(readFileSync(join(out, 'results.json'), 'utf8'))).toEqual(printed);
   });
 
-  test('refuses a folder holding other files, and writes into it with --force', async () => {
+  test('refuses a folder holding other files, and replaces its whole content with --force', async () => {
     const dir = tmp();
     const file = join(dir, 'scenario.json');
     writeFileSync(file, shortScenario());
-    writeFileSync(join(dir, 'notes.txt'), 'mine');
-    await expect(runCommand.run(ctx([file], { out: dir }).c)).rejects.toThrow(/holds other files \(.*notes\.txt.*\).*--force/);
-    expect(existsSync(join(dir, 'results.json'))).toBe(false);
-    expect(await runCommand.run(ctx([file], { out: dir, force: true }).c)).toBe(0);
-    expect(readFileSync(join(dir, 'notes.txt'), 'utf8')).toBe('mine');
-    expect(readdirSync(dir).filter((f) => f.endsWith('.partial'))).toEqual([]);
+    const out = join(dir, 'out');
+    mkdirSync(out);
+    writeFileSync(join(out, 'notes.txt'), 'mine');
+    await expect(runCommand.run(ctx([file], { out }).c)).rejects.toThrow(/holds other files \(.*notes\.txt.*\).*--force/);
+    expect(readdirSync(out)).toEqual(['notes.txt']);
+    expect(await runCommand.run(ctx([file], { out, force: true, 'no-ensemble': true }).c)).toBe(0);
+    expect(readdirSync(out).sort()).toEqual(['exposure.csv', 'results.json', 'summary.csv']);
+    expect(readdirSync(dir).sort()).toEqual(['out', 'scenario.json']);
+  });
+
+  test('refuses --force on a folder that holds the scenario file itself', async () => {
+    const dir = tmp();
+    const file = join(dir, 'scenario.json');
+    writeFileSync(file, shortScenario());
+    await expect(runCommand.run(ctx([file], { out: dir, force: true }).c)).rejects.toThrow(/--out .*scenario\.json/);
+    expect(readdirSync(dir)).toEqual(['scenario.json']);
+  });
+
+  test('a run without --pdf into the folder of an earlier run with --pdf leaves nothing of the earlier run', async () => {
+    const dir = tmp();
+    const file = join(dir, 'scenario.json');
+    writeFileSync(file, shortScenario());
+    const out = join(dir, 'out');
+    expect(await runCommand.run(ctx([file], { out, 'no-ensemble': true }).c)).toBe(0);
+    // the earlier run's briefing (a run with --pdf writes it beside the results)
+    writeFileSync(join(out, 'report.pdf'), '%PDF-1.4 earlier run');
+    expect(await runCommand.run(ctx([file], { out, 'no-ensemble': true }).c)).toBe(0);
+    expect(readdirSync(out).sort()).toEqual(['exposure.csv', 'results.json', 'summary.csv']);
   });
 
   test('a scenario with an error is refused with its path and nothing is written', async () => {
