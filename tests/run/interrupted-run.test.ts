@@ -63,7 +63,7 @@ function runAndKill(args: string[], cwd: string, opts: { delay_ms?: number; kill
 
 function scenario(name: string): string {
   const desk = DEMO_SCENARIO.personas.filter((p) => p.id === 'desk-worker');
-  return JSON.stringify({ ...DEMO_SCENARIO, name, run: { startDate: '2026-03-23', days: 2 }, personas: desk, rosters: [], strategies: DEMO_SCENARIO.strategies.filter((s) => s.personas?.includes('desk-worker')).slice(0, 1) });
+  return JSON.stringify({ ...DEMO_SCENARIO, name, run: { startDate: '2026-03-23', days: 2 }, personas: desk, rosters: [], strategies: (DEMO_SCENARIO.strategies ?? []).filter((s) => s.personas?.includes('desk-worker')).slice(0, 1) });
 }
 
 describe.skipIf(!built)('zeitlight run killed part-way', () => {
