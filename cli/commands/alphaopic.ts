@@ -3,10 +3,10 @@
  * illuminance, chromaticity, CCT and Duv of one spectrum. JSON keys follow the stable CLI
  * contract (architecture §4); `x`, `y`, `age_years`, `input`, `warnings`, `caution` are extra.
  */
-import { readFileSync } from 'node:fs';
 import { CliError, UsageError } from '../cli-error.js';
 import type { Command, CommandContext } from '../command.js';
 import { numberOption, stringOption } from '../args.js';
+import { readInputFile } from '../input-file.js';
 import { formatTable, HEALTH_CAUTION, printJson } from '../output.js';
 import { ALPHA_OPIC_KEYS, type AlphaOpicKey } from '../../model/photometry/action-spectra.js';
 import { alphaOpicQuantities, photopicIlluminance_lx, scaleToIlluminance } from '../../model/photometry/alpha-opic.js';
@@ -34,14 +34,7 @@ interface LoadedInput {
 }
 
 function readSpectrumFile(path: string, column: string | undefined): LoadedInput {
-  let text: string;
-  try {
-    text = readFileSync(path, 'utf8');
-  } catch (err) {
-    const code = (err as NodeJS.ErrnoException).code;
-    const why = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a directory' : code === 'EACCES' ? 'permission denied' : (err as Error).message;
-    throw new CliError(`cannot read spectrum file "${path}": ${why}`);
-  }
+  const text = readInputFile(path, 'spectrum');
   try {
     const r = parseSpdCsv(text, path, column === undefined ? {} : { column });
     return {

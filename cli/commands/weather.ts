@@ -3,22 +3,13 @@
  * location, months, snow days, illuminance statistics, missing values and warnings by line — so a
  * user can check what they loaded before a run.
  */
-import { readFileSync } from 'node:fs';
 import { EpwError, parseEpw } from '../../model/weather/epw.js';
 import { summariseEpw, type EpwSummary } from '../../model/weather/epw-summary.js';
 import { positionals } from '../args.js';
 import { CliError } from '../cli-error.js';
+import { readInputFile } from '../input-file.js';
 import type { Command, CommandContext } from '../command.js';
 import { formatTable, printJson } from '../output.js';
-
-function readText(path: string): string {
-  try {
-    return readFileSync(path, 'utf8');
-  } catch (err) {
-    const code = (err as NodeJS.ErrnoException).code;
-    throw new CliError(`${path}: cannot read the weather file (${code === 'ENOENT' ? 'no such file' : code ?? String(err)})`);
-  }
-}
 
 function toJson(s: EpwSummary) {
   const l = s.location;
@@ -49,7 +40,7 @@ export const weatherCommand: Command = {
     const [path] = positionals(ctx, ['file.epw']) as [string];
     let summary: EpwSummary;
     try {
-      summary = summariseEpw(parseEpw(readText(path), path));
+      summary = summariseEpw(parseEpw(readInputFile(path, 'weather'), path));
     } catch (err) {
       if (err instanceof EpwError) throw new CliError(err.message);
       throw err;

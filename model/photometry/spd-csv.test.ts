@@ -55,6 +55,18 @@ describe('spectral CSV input', () => {
     expect(r.warnings.join('\n')).toMatch(/short\.csv: the data cover 400–700 nm.*outside 400–700 nm was assumed to be zero/);
   });
 
+  it('sets small negative values (spectrometer noise) to 0 and counts them in a warning', () => {
+    const r = parseSpdCsv('wavelength_nm,E\n380,-0.001\n390,-0.015\n400,0.2\n500,1\n780,-0.004\n', 'noise.csv');
+    expect(r.warnings).toContainEqual('noise.csv: 3 negative value(s) down to -0.015 (at 390 nm, line 3) taken as measurement noise and set to 0');
+    expect(Math.min(...r.spectrum.values)).toBe(0);
+    // the same as the file with the noise written as 0
+    expect([...r.spectrum.values]).toEqual([...parseSpdCsv('wavelength_nm,E\n380,0\n390,0\n400,0.2\n500,1\n780,0\n', 'zero.csv').spectrum.values]);
+  });
+
+  it('refuses a negative value larger than noise (2 % of the peak), naming its line', () => {
+    expect(errorOf('wavelength_nm,E\n380,-0.001\n390,-0.03\n500,1\n780,0\n')).toMatch(/spd\.csv, line 3, column "E": negative value -0\.03.*more than measurement noise \(below -0\.02/);
+  });
+
   it('names the problem, the file and the line for bad input', () => {
     expect(errorOf('')).toMatch(/spd\.csv: the file is empty/);
     expect(errorOf('380,1\n390,2\n')).toMatch(/spd\.csv, line 1: missing header row/);

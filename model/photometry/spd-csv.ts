@@ -3,7 +3,9 @@
  * Format: one header row naming the columns, then rows `wavelength_nm,<value>[,...]`;
  * wavelengths in nm, strictly increasing, any step and range; values are spectral irradiance
  * in W·m⁻²·nm⁻¹ (or relative, when the caller scales to an illuminance). Lines starting with
- * `#` and blank lines are ignored. Comma, semicolon or tab separated; with semicolon or tab
+ * `#` and blank lines are ignored. Small negative values (spectrometer noise in dark parts of the
+ * range, down to NEGATIVE_NOISE_SHARE of the peak) are set to 0 and counted in a warning; a
+ * larger negative value is refused. Comma, semicolon or tab separated; with semicolon or tab
  * separators a decimal comma is accepted. Every problem is reported with the file label, the
  * line number and the column, and nothing is returned for bad input.
  */
@@ -37,6 +39,14 @@ export interface SpdCsvResult {
 
 const NUMBER = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
 
+/**
+ * Negative readings down to this share of the spectrum's peak are taken as measurement noise and
+ * set to 0 (dark-current noise of array spectrometers is of this order in the dark ends of the
+ * range; common practice, the threshold is our choice). Larger negative values mean a wrong file,
+ * column or baseline.
+ */
+export const NEGATIVE_NOISE_SHARE = 0.02;
+
 function parseCell(raw: string, decimalComma: boolean): number {
   const text = decimalComma ? raw.replace(',', '.') : raw;
   return NUMBER.test(text) ? Number(text) : Number.NaN;
@@ -47,6 +57,29 @@ function detectDelimiter(line: string): ',' | ';' | '\t' {
   if (line.includes(';') && !line.includes(',')) return ';';
   if (line.includes(';') && line.split(';').length > line.split(',').length) return ';';
   return ',';
+}
+
+/** Sets small negative values to 0 in place; calls `refuse` for the first large one. */
+function clipNoise(
+  values: number[],
+  lines: readonly number[],
+  wavelengths: readonly number[],
+  refuse: (line: number, value: number, limit: number) => never,
+): { count: number; lowest: number; at_nm: number; line: number } | null {
+  const peak = Math.max(0, ...values);
+  const limit = -NEGATIVE_NOISE_SHARE * peak;
+  let count = 0;
+  let lowest = 0;
+  let at = 0;
+  for (let i = 0; i < values.length; i++) {
+    const v = values[i] as number;
+    if (v >= 0) continue;
+    if (v < limit || peak === 0) refuse(lines[i] as number, v, Number(limit.toPrecision(3)));
+    count++;
+    if (v < lowest) [lowest, at] = [v, i];
+    values[i] = 0;
+  }
+  return count === 0 ? null : { count, lowest, at_nm: wavelengths[at] as number, line: lines[at] as number };
 }
 
 export function parseSpdCsv(text: string, fileLabel: string, options: SpdCsvOptions = {}): SpdCsvResult {
@@ -63,6 +96,7 @@ export function parseSpdCsv(text: string, fileLabel: string, options: SpdCsvOpti
   const warnings: string[] = [];
   const wavelengths: number[] = [];
   const values: number[] = [];
+  const lineOf: number[] = [];
   let header: string[] | undefined;
   let valueIndex = 1;
   let valueName = '';
@@ -97,15 +131,21 @@ export function parseSpdCsv(text: string, fileLabel: string, options: SpdCsvOpti
     const prev = wavelengths[wavelengths.length - 1];
     if (prev !== undefined && w === prev) fail(`, line ${lineNo}`, `wavelength ${w} nm repeats line ${previousLine}; each wavelength may appear once`);
     if (prev !== undefined && w < prev) fail(`, line ${lineNo}`, `wavelength ${w} nm comes after ${prev} nm (line ${previousLine}); wavelengths must increase from row to row`);
-    if (v < 0) fail(`, line ${lineNo}, column "${valueName}"`, `negative value ${v}; spectral irradiance cannot be negative (set measurement noise below zero to 0 before loading)`);
     if (w <= 0) fail(`, line ${lineNo}, column "${header[0]}"`, `wavelength ${w} nm must be positive`);
     wavelengths.push(w);
     values.push(v);
+    lineOf.push(lineNo);
     previousLine = lineNo;
   });
 
   if (header === undefined) fail('', 'the file is empty (no header row and no data)');
   if (wavelengths.length < 2) fail('', `needs at least two data rows after the header, found ${wavelengths.length}`);
+  const clipped = clipNoise(values, lineOf, wavelengths, (line, v, limit) =>
+    fail(`, line ${line}, column "${valueName}"`, `negative value ${v}; spectral irradiance cannot be negative, and this is more than measurement noise (below ${limit}, ${NEGATIVE_NOISE_SHARE * 100} % of the peak)`),
+  );
+  if (clipped !== null) {
+    warnings.push(`${fileLabel}: ${clipped.count} negative value(s) down to ${clipped.lowest} (at ${clipped.at_nm} nm, line ${clipped.line}) taken as measurement noise and set to 0`);
+  }
   const from = wavelengths[0] as number;
   const to = wavelengths[wavelengths.length - 1] as number;
   if (to < GRID_START_NM || from > GRID_END_NM) {

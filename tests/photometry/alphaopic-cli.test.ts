@@ -91,7 +91,7 @@ describe('zeitlight alphaopic', () => {
   });
 
   const bad: [string, string[], RegExp][] = [
-    ['an unreadable file', ['no-such-file.csv'], /cannot read spectrum file "no-such-file\.csv": no such file/],
+    ['an unreadable file', ['no-such-file.csv'], /cannot read the spectrum file no-such-file\.csv: no such file/],
     ['a missing header', ['@noheader'], /noheader\.csv, line 1: missing header row/],
     ['a non-numeric cell, naming the line', ['@text'], /text\.csv, line 4, column "E": "n\/a" is not a number/],
     ['unsorted wavelengths', ['@unsorted'], /unsorted\.csv, line 4: wavelength 450 nm comes after 500 nm/],

@@ -83,6 +83,6 @@ describe('zeitlight weather', () => {
   it('refuses a missing file, naming it', async () => {
     const r = await run(['weather', '/nonexistent/x.epw', '--json']);
     expect(r.status).toBe(1);
-    expect(r.stderr).toMatch(/\/nonexistent\/x\.epw: cannot read the weather file \(no such file\)/);
+    expect(r.stderr).toMatch(/cannot read the weather file \/nonexistent\/x\.epw: no such file/);
   });
 });
