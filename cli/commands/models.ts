@@ -5,11 +5,11 @@
  */
 import type { Command, CommandContext } from '../command.js';
 import { formatTable, HEALTH_CAUTION, printJson } from '../output.js';
-import { DLMO_BEFORE_CBTMIN_H } from '../../model/circadian/body-clock.js';
+import { MELATONIN_OUTPUT_DEFINITIONS } from '../../model/circadian/body-clock.js';
 import { calibrationMelanopicDer, CALIBRATION_ILLUMINANT } from '../../model/circadian/calibration.js';
 import { ST_HILAIRE_MELATONIN } from '../../model/circadian/melatonin-sthilaire.js';
 import { MELATONIN_PROCESS_L } from '../../model/circadian/melatonin-pass.js';
-import { createPacemaker, DEFAULT_PACEMAKER_ID, PACEMAKER_IDS } from '../../model/circadian/registry.js';
+import { createPacemaker, DEFAULT_ENSEMBLE_PACEMAKERS, DEFAULT_PACEMAKER_ID, PACEMAKER_IDS } from '../../model/circadian/registry.js';
 import { HCL_PRESETS } from '../../model/circadian/sleep-switch-hcl.js';
 import { HEADLINE_SLEEPINESS_ID, SLEEPINESS_MODEL_IDS, SLEEPINESS_MODELS } from '../../model/circadian/sleepiness-registry.js';
 
@@ -25,6 +25,7 @@ export const modelsCommand: Command = {
       return {
         id,
         default: id === DEFAULT_PACEMAKER_ID,
+        ensemble: DEFAULT_ENSEMBLE_PACEMAKERS.includes(id),
         label: m.label,
         source: m.source,
         state: m.stateNames,
@@ -32,12 +33,12 @@ export const modelsCommand: Command = {
         process_l: { ...processL, source: processLSource },
         intrinsic_period_h: Math.round(m.tau_h * 10000) / 10000,
         cbtmin_rule: m.marker.kind === 'x-min' ? `time of the x minimum + ${m.marker.cbtminOffset_h} h` : 'time at which ψ ≡ π',
-        dlmo_rule: `CBTmin − ${DLMO_BEFORE_CBTMIN_H} h`,
+        dlmo_rule: MELATONIN_OUTPUT_DEFINITIONS.dlmo_h,
       };
     });
     const doc = {
       pacemakers,
-      melatonin: { id: 'sthilaire07-melatonin', source: 'St Hilaire, Gronfier, Zeitzer & Klerman 2007 J Pineal Res 43:294', parameters: ST_HILAIRE_MELATONIN, suppression_process_l: MELATONIN_PROCESS_L, suppression_definition: 'acute: 100·(1 − AUC / AUC of the same night without light suppression)' },
+      melatonin: { id: 'sthilaire07-melatonin', source: 'St Hilaire, Gronfier, Zeitzer & Klerman 2007 J Pineal Res 43:294', parameters: ST_HILAIRE_MELATONIN, suppression_process_l: MELATONIN_PROCESS_L, suppression_definition: MELATONIN_OUTPUT_DEFINITIONS.melatonin_suppression_pct },
       sleepiness: SLEEPINESS_MODEL_IDS.map((id) => {
         const m = SLEEPINESS_MODELS[id];
         return { id, headline: id === HEADLINE_SLEEPINESS_ID, label: m.label, source: m.source, parameters: m.parameters };

@@ -3,8 +3,9 @@
  * [--sleep <csv>] [--alarm <hour>] [--json]` — body clock, melatonin and sleepiness for one
  * person from a light series. JSON keys follow the stable CLI contract (architecture §4):
  * `model`, `xmin_h`, `cbtmin_h`, `dlmo_h`, `melatonin_suppression_pct` (per night), `kss_hourly`;
- * `kss_sleepy_hours`, `melatonin_pg_ml_hourly`, `sleep_episodes`, `entrainment`, `input`, `warnings`, `definitions` and
- * `caution` are extra.
+ * `dlmo_25pct_h`, `kss_sleepy_hours`, `melatonin_pg_ml_hourly`, `dim_melatonin_pg_ml_hourly`,
+ * `sleep_episodes`, `entrainment`, `input`, `warnings`, `definitions` and `caution` are extra.
+ * `definitions` says what each output means (DLMO: dim-light onset; suppression: its window).
  * Without --sleep, sleep is predicted by the model (free sleep), with an optional daily alarm.
  */
 import { CliError, UsageError } from '../cli-error.js';
@@ -12,7 +13,7 @@ import type { Command, CommandContext } from '../command.js';
 import { numberOption, positionals, requiredNumberOption, stringOption } from '../args.js';
 import { readInputFile } from '../input-file.js';
 import { formatTable, HEALTH_CAUTION, printJson } from '../output.js';
-import { DLMO_BEFORE_CBTMIN_H, runBodyClock, type InitialCondition } from '../../model/circadian/body-clock.js';
+import { MELATONIN_OUTPUT_DEFINITIONS, runBodyClock, type InitialCondition } from '../../model/circadian/body-clock.js';
 import { BodyClockInputError, parseSleepCsv } from '../../model/circadian/light-csv.js';
 import { lightFromSteps } from '../../model/circadian/light-series.js';
 import { LightSeriesCsvError, readLightSeriesCsv } from '../../schedules/lightlog/light-series-csv.js';
@@ -96,17 +97,18 @@ export const simulateCommand: Command = {
       dlmo_h: r.dlmo_h.map((v) => round(v)),
       melatonin_suppression_pct: r.melatonin_suppression_pct.map((v) => (v === null ? null : round(v, 2))),
       kss_hourly: r.kss_hourly.map((v) => (v === null ? null : round(v, 2))),
+      dlmo_25pct_h: r.dlmo_25pct_h.map((v) => (Number.isFinite(v) ? round(v) : null)),
       kss_sleepy_hours: r.kss_sleepy_hours,
       melatonin_pg_ml_hourly: r.melatonin_pg_ml_hourly.map((v) => round(v, 2)),
+      dim_melatonin_pg_ml_hourly: r.dim_melatonin_pg_ml_hourly.map((v) => round(v, 2)),
       sleep_episodes: r.sleep_episodes.map((e) => ({ start_h: round(e.start_h), end_h: round(e.end_h) })),
       entrainment: r.entrainment ?? null,
       input: { light: lightPath, light_unit: light.unit, light_form: lightFile.form, start_local: lightFile.start_local, sleep: sleepPath ?? (alarm === undefined ? 'predicted' : `predicted, alarm ${alarm} h`), days },
       warnings,
       definitions: {
         cbtmin_h: `x minimum + ${model.marker.cbtminOffset_h} h (model's phase-reference offset)`,
-        dlmo_h: `CBTmin − ${DLMO_BEFORE_CBTMIN_H} h`,
-        melatonin_suppression_pct: 'acute: 100·(1 − plasma melatonin area / area of the same person in dim light), per night from synthesis onset to the next onset; null when there is no melatonin to suppress or the run ends before the night is over (4 h after synthesis offset)',
-        melatonin_pg_ml_hourly: 'plasma melatonin (St Hilaire et al. 2007) at each whole hour since t = 0, with light suppression, pg/mL',
+        ...MELATONIN_OUTPUT_DEFINITIONS,
+        melatonin_suppression_pct: `${MELATONIN_OUTPUT_DEFINITIONS.melatonin_suppression_pct}; null for a night cut off by the end of the run`,
         kss_hourly: 'mean KSS of the headline sleepiness model (see zeitlight models) over each hour awake since t = 0; null when asleep the whole hour; ≥ 7 is sleepy',
       },
       caution: HEALTH_CAUTION,
@@ -116,9 +118,8 @@ export const simulateCommand: Command = {
       return 0;
     }
     ctx.stdout(`Model: ${model.label} (${modelId})\n\n`);
-    const rows = r.cbtmin_h.map((c) => [String(Math.floor(c / 24)), clock(c), clock(c - DLMO_BEFORE_CBTMIN_H)]);
-    ctx.stdout(formatTable(['day', 'CBTmin', 'DLMO'], rows));
-    ctx.stdout(`\nMelatonin suppression per night (%): ${result.melatonin_suppression_pct.map((v) => (v === null ? 'n/a' : v.toFixed(1))).join(', ') || 'none'}\n`);
+    ctx.stdout(formatTable(['day', 'CBTmin'], r.cbtmin_h.map((c) => [String(Math.floor(c / 24)), clock(c)])));
+    ctx.stdout(`\n${formatTable(['night', 'DLMO (dim light, 10 pg/mL)', 'suppression while awake in the biological night (%)'], r.melatonin_nights.map((n, i) => [String(i + 1), clock(n.onset_h), result.melatonin_suppression_pct[i] === null || result.melatonin_suppression_pct[i] === undefined ? 'n/a (night cut off)' : (result.melatonin_suppression_pct[i] as number).toFixed(1)]))}`);
     ctx.stdout(`Hours at KSS ≥ 7: ${r.kss_sleepy_hours.length}\n`);
     for (const w of warnings) ctx.stdout(`Note: ${w}\n`);
     ctx.stdout(`\n${HEALTH_CAUTION}\n`);

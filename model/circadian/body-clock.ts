@@ -4,13 +4,17 @@
  * person and one pacemaker model.
  *
  * Phase markers per day: the x minimum (model's own variable), CBTmin = x-min + the model's
- * offset (x⁷: 0.8 h; cubic: 0; Hannay: ψ ≡ π), DLMO = CBTmin − 7 h (Hannay 2019 marker
- * convention: DLMO at ψ = 5π/12, CBTmin at ψ = π, i.e. 7 h apart; used for every model).
+ * offset (x⁷: 0.8 h; cubic: 0; Hannay: ψ ≡ π). DLMO: the dim-light melatonin onset as a clinic
+ * measures it, read from the modelled melatonin curve without light suppression (what the person
+ * would show in dim light) rising through 10 pg/mL plasma; the 25 %-of-peak rule beside it
+ * (melatonin-nights.ts). Melatonin suppression per night: over the awake hours of the dim-light
+ * biological night (a fixed window; never from one onset to the next).
  */
 import type { Integrator } from '../solver/integrator.js';
 import { daySleepSpec, entrain, type EntrainResult } from './entrain.js';
 import type { LightSeries } from './light-series.js';
 import type { MelatoninNight } from './melatonin-pass.js';
+import { DLMO_25PCT_DEFINITION, DLMO_DEFINITION, dlmoTimes, nightlySuppression, SUPPRESSION_DEFINITION } from './melatonin-nights.js';
 import type { PersonParams } from './pacemaker.js';
 import { createPacemaker, DEFAULT_PACEMAKER_ID, type PacemakerId } from './registry.js';
 import { KSS_SLEEPY } from './sleepiness-postnova.js';
@@ -18,8 +22,20 @@ import { PMOL_L_PER_PG_ML } from './melatonin-sthilaire.js';
 import type { SleepEpisode, SleepSpec } from './sleep-input.js';
 import { simulate, stateFromPacemaker, type SimState, type SimulationRun } from './simulate.js';
 
-/** DLMO = CBTmin − 7 h (Hannay 2019 marker convention; the ~7 h itself is from memory in the literature notes). */
+/**
+ * DLMO ≈ CBTmin − 7 h: the Hannay 2019 marker convention (DLMO at ψ = 5π/12, CBTmin at ψ = π; the
+ * ~7 h itself is from memory). Not the product's DLMO; a fallback where a night has no DLMO.
+ */
 export const DLMO_BEFORE_CBTMIN_H = 7;
+
+/** What each melatonin output of a body-clock result means (printed beside it by the CLI). */
+export const MELATONIN_OUTPUT_DEFINITIONS = {
+  dlmo_h: DLMO_DEFINITION,
+  dlmo_25pct_h: DLMO_25PCT_DEFINITION,
+  melatonin_suppression_pct: SUPPRESSION_DEFINITION,
+  melatonin_pg_ml_hourly: 'plasma melatonin as lit (with light suppression; St Hilaire et al. 2007) at each whole hour since t = 0, pg/mL',
+  dim_melatonin_pg_ml_hourly: 'plasma melatonin in dim light (the same person without light suppression; the curve the DLMO is read from) at each whole hour since t = 0, pg/mL',
+} as const;
 
 export type InitialCondition =
   | { readonly kind: 'entrained' }
@@ -51,8 +67,11 @@ export interface BodyClockResult {
   readonly model: PacemakerId;
   readonly xmin_h: number[];
   readonly cbtmin_h: number[];
+  /** Dim-light melatonin onset per night (10 pg/mL of the curve without suppression), h. */
   readonly dlmo_h: number[];
-  /** Acute suppression per night (%), null where the dim-light reference is ~0 or the run ends inside the night. */
+  /** The same nights by the 25 %-of-peak rule (NaN where the peak lies after the end of the run), h. */
+  readonly dlmo_25pct_h: number[];
+  /** Suppression per night over the awake hours of the dim-light biological night (%); null for a night cut off by the end of the run. */
   readonly melatonin_suppression_pct: (number | null)[];
   /** Mean KSS of each clock hour while awake; null for hours spent asleep. */
   readonly kss_hourly: (number | null)[];
@@ -60,15 +79,14 @@ export interface BodyClockResult {
   readonly kss_sleepy_hours: number[];
   readonly sleep_episodes: SleepEpisode[];
   readonly melatonin_nights: MelatoninNight[];
-  /** Plasma melatonin at each whole hour since t = 0 (pg/mL), with light suppression: the curve per day. */
+  /** Plasma melatonin at each whole hour since t = 0 (pg/mL), as lit (with light suppression). */
   readonly melatonin_pg_ml_hourly: number[];
+  /** The same without light suppression: the dim-light curve the DLMO is read from (pg/mL). */
+  readonly dim_melatonin_pg_ml_hourly: number[];
   readonly entrainment?: { readonly days: number; readonly converged: boolean };
   /** The full run (samples, final state, solver counts). */
   readonly run: SimulationRun;
 }
-
-/** Minimum dim-light melatonin area (pmol·h/L) for a night's % suppression to be reported. */
-export const MIN_NIGHT_AUC = 1;
 
 export function hourlyKss(run: SimulationRun, hours: number): (number | null)[] {
   const out: (number | null)[] = new Array<number | null>(hours).fill(null);
@@ -140,15 +158,15 @@ export function runBodyClock(input: BodyClockInput): BodyClockResult {
     model: modelId,
     xmin_h: run.xmin_h,
     cbtmin_h: run.cbtmin_h,
-    dlmo_h: run.cbtmin_h.map((t) => t - DLMO_BEFORE_CBTMIN_H),
-    melatonin_suppression_pct: run.nights.map((n) =>
-      n.complete && n.dimAuc_pmol_h_L >= MIN_NIGHT_AUC && Number.isFinite(n.acuteSuppression_pct) ? n.acuteSuppression_pct : null,
-    ),
+    dlmo_h: dlmoTimes(run.nights),
+    dlmo_25pct_h: run.nights.map((n) => n.dlmo25_h),
+    melatonin_suppression_pct: nightlySuppression(run.nights),
     kss_hourly: kss,
     kss_sleepy_hours: kss.flatMap((v, k) => (v !== null && v >= KSS_SLEEPY ? [k] : [])),
     sleep_episodes: run.sleepEpisodes,
     melatonin_nights: run.nights,
     melatonin_pg_ml_hourly: hourlyValues(run, run.samples.plasmaMelatonin_pmol_L, 24 * input.days).map((v) => v / PMOL_L_PER_PG_ML),
+    dim_melatonin_pg_ml_hourly: hourlyValues(run, run.samples.dimMelatonin_pmol_L, 24 * input.days).map((v) => v / PMOL_L_PER_PG_ML),
     ...(entrainment === undefined ? {} : { entrainment: { days: entrainment.days, converged: entrainment.converged } }),
     run,
   };

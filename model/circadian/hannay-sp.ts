@@ -58,6 +58,7 @@ export function createHannaySp(person: PersonParams = {}): Pacemaker {
     id: 'hfb19-sp',
     label: 'Hannay–Booth–Forger 2019 macroscopic single-population model',
     source: 'Hannay, Booth & Forger 2019 J Biol Rhythms 34:658',
+    oscillator: 'macroscopic',
     stateNames: ['R', 'psi', 'n'],
     stateSize: 3,
     nIndex: 2,

@@ -1,7 +1,11 @@
 /**
- * Jewett–Forger–Kronauer 1999 higher-order ("x⁷") oscillator with K99 Process L
- * (J Biol Rhythms 14:493, citation from memory; equations as restated in St Hilaire et al.
- * 2007 J Pineal Res 43:294, Eqs 7–9):
+ * Jewett–Forger–Kronauer 1999 higher-order ("x⁷") oscillator (J Biol Rhythms 14:493, citation
+ * from memory; equations as restated in St Hilaire et al. 2007 J Pineal Res 43:294, Eqs 7–9),
+ * with one of two published light front ends (process-l.ts):
+ *   `jfk99-x7`       Kronauer 1999 Process L (K99), the set published with the oscillator;
+ *   `jfk99-x7-sh07`  St Hilaire et al. 2007 J Theor Biol Process L (SH07), the same group's refit.
+ * SH07 was fitted together with a non-photic sleep–wake drive on dx/dt (ρ = 0.032), which is not
+ * included here: the pacemakers of this product take light alone.
  *
  *   B      = B̂ · (1 − b·x) · (1 − b·xc),  b = 0.4
  *   dx/dt  = (π/12) · [xc + μ·(x/3 + 4x³/3 − 256x⁷/105) + B]
@@ -14,7 +18,7 @@
  * + 0.97 h) falls ≈ 0.6 h later; it is not used for CBTmin here.
  */
 import type { Pacemaker, PersonParams } from './pacemaker.js';
-import { PROCESS_L_K99, cachedLightActivation, photicDrive, processLRate_per_h, type ProcessLParams } from './process-l.js';
+import { PROCESS_L_K99, PROCESS_L_SH07, cachedLightActivation, photicDrive, processLRate_per_h } from './process-l.js';
 
 const W = Math.PI / 12;
 
@@ -28,16 +32,24 @@ export const JFK_X7_PARAMETERS = {
   cbtminOffset_h: 0.8, // φref
 } as const;
 
-export function createJfkX7(person: PersonParams = {}, processL: ProcessLParams = PROCESS_L_K99): Pacemaker {
+/** Light front end of the x⁷ oscillator: Kronauer 1999 or St Hilaire 2007 (J Theor Biol). */
+export type JfkX7FrontEnd = 'k99' | 'sh07';
+
+export function createJfkX7(person: PersonParams = {}, frontEnd: JfkX7FrontEnd = 'k99'): Pacemaker {
   const P = JFK_X7_PARAMETERS;
+  const processL = frontEnd === 'k99' ? PROCESS_L_K99 : PROCESS_L_SH07;
   const tau = person.tau_h ?? P.tau_h;
   const w2 = (24 / (P.periodCorrection * tau)) ** 2;
   const { mu, q, k, b } = P;
   const activation = cachedLightActivation(processL);
   return {
-    id: 'jfk99-x7',
-    label: 'Jewett–Forger–Kronauer 1999 higher-order (x⁷) oscillator with Kronauer 1999 Process L',
-    source: 'Jewett, Forger & Kronauer 1999 J Biol Rhythms 14:493; Kronauer, Forger & Jewett 1999 J Biol Rhythms 14:500; restated in St Hilaire et al. 2007 J Pineal Res 43:294',
+    id: frontEnd === 'k99' ? 'jfk99-x7' : 'jfk99-x7-sh07',
+    label:
+      frontEnd === 'k99'
+        ? 'Jewett–Forger–Kronauer 1999 higher-order (x⁷) oscillator with Kronauer 1999 Process L'
+        : 'Jewett–Forger–Kronauer 1999 higher-order (x⁷) oscillator with the St Hilaire et al. 2007 Process L (without its non-photic drive)',
+    source: `Jewett, Forger & Kronauer 1999 J Biol Rhythms 14:493, restated in St Hilaire et al. 2007 J Pineal Res 43:294; Process L: ${processL.source}`,
+    oscillator: 'x7',
     stateNames: ['x', 'xc', 'n'],
     stateSize: 3,
     nIndex: 2,

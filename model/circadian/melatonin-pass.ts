@@ -1,28 +1,34 @@
 /**
  * Second pass of the simulation: plasma melatonin (St Hilaire et al. 2007 J Pineal Res; see
  * melatonin-sthilaire.ts) driven by the synthesis switch times found on the pacemaker trajectory
- * and by its own Process L (MELATONIN_PROCESS_L). Melatonin does not feed back on the pacemaker in this model, so it is
- * integrated after the pacemaker pass.
+ * and by its own Process L (MELATONIN_PROCESS_L). Melatonin does not feed back on the pacemaker
+ * in this model, so it is integrated after the pacemaker pass.
  *
  * Method: the time axis is split at light breakpoints, sleep/wake and synthesis switches; in
  * each piece the light is constant (or smooth), so n of Process L relaxes exponentially and the
  * linear pineal/plasma pair is advanced by its exact exponential propagator, with the forcing A'(t)
  * taken at the step midpoint (second order in the step): 1-minute steps for the first 30 min of
  * each piece, where the transients are, 6-minute steps after.
- * An unsuppressed "dim-light" pair (m = 0) runs alongside for acute % suppression.
+ * An unsuppressed "dim-light" pair (m = 0) runs alongside: the curve the person would show in
+ * dim light, from which the DLMO and the nights are read (melatonin-nights.ts).
  */
 import { segmentIndexAt, type LightSeries } from './light-series.js';
 import { ST_HILAIRE_MELATONIN as MEL, synthesisRate } from './melatonin-sthilaire.js';
+import { melatoninNights, type MelatoninNight } from './melatonin-nights.js';
 import { PROCESS_L_SH07, lightActivation_per_min, type ProcessLParams } from './process-l.js';
 
 /**
- * Process L behind the suppression term m·B̂ (open item settled by validation): St Hilaire et al.
- * 2007 J Theor Biol (SH07), not Kronauer 1999 (K99). The melatonin paper cites K99, but with K99
- * the model suppresses 11 % at 1 lx and 19 % at 3 lx and saturates only near 500 lx, while the
- * paper reports half-maximal suppression at 98 lx, saturation near 200 lx and (Zeitzer 2000)
- * minimal suppression below 80 lx. SH07's low-light threshold I/(I + 100) reproduces saturation
- * at ≈ 200 lx and negligible suppression in dim light; its half-maximum is 48 lx in our protocol
- * (docs/validation/circadian.md). Both sets were published by the same group in the same year.
+ * Process L behind the suppression term m·B̂ (St Hilaire et al. 2007 J Theor Biol, SH07, with the
+ * paper's m = 7). The melatonin paper cites Kronauer 1999 (K99) for its Process L; both sets were
+ * run in the Zeitzer et al. 2000 protocol (6.5 h centred 3.5 h before CBTmin, suppression over the
+ * exposure; tests/circadian/published-checks.test.ts). K99 suppresses 12 % at 1 lx and 32 % at
+ * 10 lx, half-maximum 27 lx; SH07, with its I/(I + 100) low-light threshold, suppresses < 1 % at
+ * 3 lx, saturates near 200 lx as the data do, half-maximum 48 lx. Zeitzer's data give 106 lx and
+ * St Hilaire's model paper reports 98 lx: with either set the model is about twice as sensitive
+ * as the data (model limitation, docs/validation/circadian.md). The recalibrated suppression of
+ * Tekieh et al. 2020 (half-maximum 0.031 W/m² melanopic, about 38–41 lx of the cool-white
+ * calibration source) is no closer and belongs to another melatonin model; it is not used.
+ * SH07 is the closer published set, and the front end of the default pacemaker.
  */
 export const MELATONIN_PROCESS_L: ProcessLParams = PROCESS_L_SH07;
 import type { SleepEpisode } from './sleep-input.js';
@@ -67,23 +73,7 @@ export interface MelatoninPassInput {
   readonly sampleStep_h: number;
 }
 
-export interface MelatoninNight {
-  /** Synthesis onset and the next onset (or the end of the run), h. */
-  readonly onset_h: number;
-  readonly end_h: number;
-  /** Acute suppression: 100·(1 − ∫H2 / ∫H2_dim) over the night (same person, same phase, dim light). */
-  readonly acuteSuppression_pct: number;
-  readonly auc_pmol_h_L: number;
-  readonly dimAuc_pmol_h_L: number;
-  /**
-   * False when the run ends before the night is over (no synthesis offset inside it, or less than
-   * NIGHT_TAIL_H after it): the areas then cover only part of the night.
-   */
-  readonly complete: boolean;
-}
-
-/** Time after the synthesis offset for plasma melatonin to clear (h; ≈ 8 half-lives of 28 min). */
-export const NIGHT_TAIL_H = 4;
+export type { MelatoninNight } from './melatonin-nights.js';
 
 export interface MelatoninPassResult {
   readonly final: MelatoninState;
@@ -121,9 +111,12 @@ export function melatoninPass(inp: MelatoninPassInput): MelatoninPassResult {
   const plasma: number[] = [];
   const plasmaDim: number[] = [];
   let nextSample = Math.ceil(t0 / inp.sampleStep_h - 1e-9) * inp.sampleStep_h;
-  const onsets: { t: number; auc: number; dim: number }[] = [];
-  let auc = 0;
-  let aucDim = 0;
+  const onsets: number[] = [];
+  // fine trace for the nights: values at every step boundary, sleep state per step
+  const traceT: number[] = [t0];
+  const traceLit: number[] = [h2];
+  const traceDim: number[] = [h2Dim];
+  const traceAwake: boolean[] = [];
   const P = MELATONIN_PROCESS_L;
   const beta = P.beta_per_min;
 
@@ -145,7 +138,7 @@ export function melatoninPass(inp: MelatoninPassInput): MelatoninPassResult {
     while (sw < switches.length && (switches[sw] as SynthesisSwitch).t_h <= a + 1e-12) {
       const s = switches[sw] as SynthesisSwitch;
       const value = synthesisRate(on, since, atSwitch, s.t_h);
-      if (s.on && !on) onsets.push({ t: s.t_h, auc, dim: aucDim });
+      if (s.on && !on) onsets.push(s.t_h);
       on = s.on;
       since = s.t_h;
       atSwitch = value;
@@ -211,8 +204,10 @@ export function melatoninPass(inp: MelatoninPassInput): MelatoninPassResult {
           record(nextSample, ta, h2, h2Dim, nh2, nh2d, tb);
           nextSample += inp.sampleStep_h;
         }
-        auc += 0.5 * h * (h2 + nh2);
-        aucDim += 0.5 * h * (h2Dim + nh2d);
+        traceT.push(tb);
+        traceLit.push(nh2);
+        traceDim.push(nh2d);
+        traceAwake.push(!asleep);
         h1 = nh1;
         h2 = nh2;
         h1Dim = nh1d;
@@ -221,21 +216,7 @@ export function melatoninPass(inp: MelatoninPassInput): MelatoninPassResult {
       }
     }
   }
-  const nights: MelatoninNight[] = onsets.map((o, i) => {
-    const next = onsets[i + 1];
-    const a = (next?.auc ?? auc) - o.auc;
-    const d = (next?.dim ?? aucDim) - o.dim;
-    const end = next?.t ?? tEnd;
-    const offset = switches.find((w) => !w.on && w.t_h > o.t && w.t_h < end);
-    return {
-      onset_h: o.t,
-      end_h: end,
-      complete: offset !== undefined && end - offset.t_h >= NIGHT_TAIL_H,
-      auc_pmol_h_L: a,
-      dimAuc_pmol_h_L: d,
-      acuteSuppression_pct: d > 0 ? 100 * (1 - a / d) : Number.NaN,
-    };
-  });
+  const nights = melatoninNights({ t_h: traceT, lit_pmol_L: traceLit, dim_pmol_L: traceDim, awake: traceAwake }, onsets);
   return {
     final: { h1, h2, h1Dim, h2Dim, nSuppression: n, on, since_h: since, atSwitch },
     sample_t_h: sample_t,

@@ -19,7 +19,7 @@ function darkPeriod(id: (typeof PACEMAKER_IDS)[number], tau_h?: number): number 
 describe('free-running period in darkness', () => {
   // Kronauer family: the 0.99729 / 0.99669 factors make the period equal τx (24.2004 h for
   // τx = 24.2, computed independently with SciPy LSODA as a regression value).
-  it.each(['jfk99-x7', 'fjk99-cubic', 'fjk99-cubic-sf14'] as const)('%s runs at τx = 24.2 h', (id) => {
+  it.each(['jfk99-x7', 'fjk99-cubic', 'fjk99-cubic-sf14', 'jfk99-x7-sh07', 'fjk99-cubic-sh07'] as const)('%s runs at τx = 24.2 h', (id) => {
     expect(darkPeriod(id)).toBeCloseTo(24.2004, 2);
   });
 

@@ -5,6 +5,13 @@
  */
 import type { ProcessLParams } from './process-l.js';
 
+/**
+ * Oscillator family: which published equations the state variables belong to. Pieces written
+ * in one family's letters (melatonin synthesis angles: x⁷; HCL sleep thresholds: cubic; KSS
+ * circadian drive: x⁷) use the raw state for that family and a carried-over phase otherwise.
+ */
+export type OscillatorFamily = 'x7' | 'cubic' | 'macroscopic';
+
 /** How the daily phase marker of a model is found. */
 export type MarkerRule =
   | { readonly kind: 'x-min'; readonly cbtminOffset_h: number }
@@ -25,6 +32,7 @@ export interface Pacemaker {
   readonly id: string;
   readonly label: string;
   readonly source: string;
+  readonly oscillator: OscillatorFamily;
   readonly stateNames: readonly string[];
   readonly stateSize: number;
   /** Index of n (Process L) in the state. */

@@ -21,6 +21,7 @@ import { nativeLightSeries } from './calibration.js';
 import { calibrationEyelidTransmission, receivedLightSeries } from './eyes-closed-light.js';
 import { scaledLightSeries, segmentIndexAt, type LightSeries } from './light-series.js';
 import { cycleAngleAtTime, cycleTimeAtAngle, darkLimitCycle, equivalentState, type LimitCycleTable } from './limit-cycle.js';
+import { MARKER_REFINE_MAX_SPAN_H, refinedMinimum } from './marker-refine.js';
 import { melatoninPass, type MelatoninNight, type MelatoninState, type SynthesisSwitch } from './melatonin-pass.js';
 import { ST_HILAIRE_MELATONIN as MEL } from './melatonin-sthilaire.js';
 import type { Pacemaker } from './pacemaker.js';
@@ -155,7 +156,7 @@ export function phaseTools(model: Pacemaker): PhaseTools {
     const own = darkLimitCycle(reference);
     let on = MEL.synOnAngle_deg * DEG;
     let off = MEL.synOffAngle_deg * DEG;
-    if (model.id !== 'jfk99-x7') {
+    if (model.oscillator !== 'x7') {
       const carry = (a: number) => cycleAngleAtTime(own, (cycleTimeAtAngle(x7, a) / x7.period_h) * own.period_h);
       on = carry(on);
       off = carry(off);
@@ -168,13 +169,13 @@ export function phaseTools(model: Pacemaker): PhaseTools {
 
 /** Cubic-oscillator (x, xc) equivalent to a pacemaker state (identity for the cubic models). */
 export function cubicEquivalent(model: Pacemaker, tools: PhaseTools, y: ArrayLike<number>): [number, number] {
-  if (model.id.startsWith('fjk99-cubic')) return [y[0] as number, y[1] as number];
+  if (model.oscillator === 'cubic') return [y[0] as number, y[1] as number];
   return equivalentState(model, tools.own, y, tools.cubic);
 }
 
-/** x⁷-oscillator (x, xc) equivalent to a pacemaker state (identity for the x⁷ model). */
+/** x⁷-oscillator (x, xc) equivalent to a pacemaker state (identity for the x⁷ models). */
 export function x7Equivalent(model: Pacemaker, tools: PhaseTools, y: ArrayLike<number>): [number, number] {
-  if (model.id === 'jfk99-x7') return [y[0] as number, y[1] as number];
+  if (model.oscillator === 'x7') return [y[0] as number, y[1] as number];
   return equivalentState(model, tools.own, y, tools.x7);
 }
 
@@ -370,8 +371,13 @@ export function simulate(opts: SimulationOptions): SimulationRun {
 
     let switchAt: number | undefined;
     let angleOld = model.angle(y);
+    let yStepStart: readonly number[] = [...y];
+    const tPiece = t;
+    const yPiece = [...y];
     const observer = (tOld: number, tNew: number, yEnd: readonly number[], dense: Dense): number | undefined => {
       steps++;
+      const yA = yStepStart;
+      yStepStart = [...yEnd];
       const angleA = angleOld;
       const angleB = model.angle(yEnd);
       angleOld = angleB;
@@ -397,7 +403,9 @@ export function simulate(opts: SimulationOptions): SimulationRun {
             if (der(mid) < 0) lo = mid;
             else hi = mid;
           }
-          const tm = 0.5 * (lo + hi);
+          // the interpolant finds the step; the piece integrated again places the minimum
+          const fromPiece = tOld - tPiece <= MARKER_REFINE_MAX_SPAN_H;
+          const tm = (fromPiece ? refinedMinimum(rhs, tPiece, yPiece, tNew, 0, tOld) : refinedMinimum(rhs, tOld, yA, tNew, 0)) ?? 0.5 * (lo + hi);
           if (dense(0, tm) < 0) addMarker(tm);
         }
         lastDxSign = sb;

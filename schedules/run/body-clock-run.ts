@@ -1,6 +1,6 @@
 /**
  * The body-clock models for one persona under one strategy (model/circadian): pacemaker
- * (default Kronauer/Jewett x⁷ with Process L, "jfk99-x7"), St Hilaire 2007 melatonin and
+ * (default DEFAULT_PACEMAKER_ID of model/circadian/registry.ts), St Hilaire 2007 melatonin and
  * suppression, Postnova 2018 sleep pressure and KSS. Light input: melanopic EDI at the eye,
  * merged into segments (light-segments.ts), at the open eye while awake and behind the closed
  * eyelids while asleep (eye-series.ts computes both per source). Sleep: the timeline's prescribed
@@ -10,7 +10,8 @@
  * by every strategy of that persona so that phase shifts compare like with like.
  * Times in real hours since the run start (local midnight of day 0).
  */
-import { DLMO_BEFORE_CBTMIN_H, hourlyKss, MIN_NIGHT_AUC } from '../../model/circadian/body-clock.js';
+import { hourlyKss } from '../../model/circadian/body-clock.js';
+import { dlmoTimes, nightlySuppression } from '../../model/circadian/melatonin-nights.js';
 import { daySleepSpec, entrain } from '../../model/circadian/entrain.js';
 import type { LightSeries } from '../../model/circadian/light-series.js';
 import type { MelatoninNight } from '../../model/circadian/melatonin-pass.js';
@@ -31,9 +32,10 @@ export const CLOSED_EYE_SEGMENT_ABS_TOL_LX = 0.01;
 
 export interface BodyClockOutcome {
   readonly cbtmin_h: number[];
+  /** Dim-light melatonin onset per night (10 pg/mL of the curve without suppression; model/circadian/melatonin-nights.ts). */
   readonly dlmo_h: number[];
   readonly nights: MelatoninNight[];
-  /** Acute suppression per night (%), null where the night is cut off by the end of the run or the dim-light reference is ~0. */
+  /** Suppression per night over the awake hours of the dim-light biological night (%), null where the night is cut off by the end of the run. */
   readonly suppression_pct: (number | null)[];
   readonly sleepEpisodes: SleepEpisode[];
   /** KSS samples (every 0.25 h; NaN asleep). */
@@ -114,9 +116,9 @@ export function runBodyClockFor(model: Pacemaker, mel_lx: Float64Array, sleep: S
   return {
     outcome: {
       cbtmin_h: run.cbtmin_h,
-      dlmo_h: run.cbtmin_h.map((t) => t - DLMO_BEFORE_CBTMIN_H),
+      dlmo_h: dlmoTimes(run.nights),
       nights: run.nights,
-      suppression_pct: run.nights.map((nt) => (nt.complete && nt.dimAuc_pmol_h_L >= MIN_NIGHT_AUC && Number.isFinite(nt.acuteSuppression_pct) ? nt.acuteSuppression_pct : null)),
+      suppression_pct: nightlySuppression(run.nights),
       sleepEpisodes: run.sleepEpisodes,
       kssSamples: { t_h: run.samples.t_h, kss: run.samples.kss },
       kssHourly: hourlyKss(run, hours),

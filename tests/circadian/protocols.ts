@@ -2,13 +2,15 @@
  * Simulated laboratory protocols used to compare the models with published numbers.
  * Baseline: entrained to an invented regular day (wake 07:00–23:00 at 150 lx, sleep dark).
  * Protocol days: awake throughout in dim light (constant-routine-like), a single light pulse.
+ * Regular-day protocols: one evening of other light after the baseline (per-night melatonin).
  */
 import { entrain } from '../../model/circadian/entrain.js';
+import type { MelatoninNight } from '../../model/circadian/melatonin-nights.js';
 import { lightFromSteps } from '../../model/circadian/light-series.js';
 import type { Pacemaker } from '../../model/circadian/pacemaker.js';
 import { trapezoid } from '../../model/circadian/area.js';
 import { simulate, type SimState, type SimulationRun } from '../../model/circadian/simulate.js';
-import { REGULAR_SLEEP_DAY0, regularDayLight } from '../../model/circadian/test-schedules.js';
+import { REGULAR_SLEEP_DAY0, regularDayLight, regularSleep } from '../../model/circadian/test-schedules.js';
 import type { Integrator } from '../../model/solver/integrator.js';
 
 export const PROTOCOL_DAYS = 5;
@@ -90,4 +92,19 @@ export function halfMaxLux(lux: readonly number[], y: readonly number[]): number
     }
   }
   return Number.NaN;
+}
+
+/**
+ * A regular day (07:00–19:00 at 150 lx, sleep 23:00–07:00 in the dark) with `evening_lx` from
+ * 19:00 to 23:00, started from the state entrained to the plain regular day (one evening of that
+ * light; `entrainedToEvening`: entrained to the day with that evening). The night that begins on
+ * day 0.
+ */
+export function eveningNight(model: Pacemaker, evening_lx: number, entrainedToEvening = false): MelatoninNight {
+  const day = lightFromSteps([0, 7, 19, 23], [0, 150, evening_lx, 0], 'native_lx', 24);
+  const e = entrain({ model, light: entrainedToEvening ? day : regularDayLight(150), sleep: REGULAR_SLEEP_DAY0 });
+  const r = simulate({ model, light: day, periodicLight: true, sleep: regularSleep(2), initial: e.state, end_h: 48 });
+  const night = r.nights.find((n) => n.onset_h > 12 && n.onset_h < 36);
+  if (night === undefined) throw new Error(`${model.id}: no melatonin night found on day 0`);
+  return night;
 }

@@ -3,6 +3,7 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { describe, expect, it } from 'vitest';
 import { runCli } from '../../cli/main.js';
+import { DEFAULT_PACEMAKER_ID, PACEMAKER_IDS } from '../../model/circadian/registry.js';
 
 const FIX = join(import.meta.dirname, 'fixtures');
 
@@ -27,13 +28,22 @@ describe('zeitlight simulate', () => {
     expect(r.code).toBe(0);
     const doc = JSON.parse(r.out) as Record<string, unknown>;
     for (const k of ['model', 'xmin_h', 'cbtmin_h', 'dlmo_h', 'melatonin_suppression_pct', 'kss_hourly']) expect(doc).toHaveProperty(k);
-    expect(doc.model).toBe('jfk99-x7');
+    expect(doc.model).toBe(DEFAULT_PACEMAKER_ID);
     const cbt = doc.cbtmin_h as number[];
     const dlmo = doc.dlmo_h as number[];
     expect(cbt.length).toBe(3);
     // entrained 23:00–07:00 sleeper: CBTmin 1.5–3.5 h before the 07:00 wake (from memory)
     cbt.forEach((c) => expect(7 - (c % 24)).toBeGreaterThan(1.5));
-    dlmo.forEach((d, i) => expect((cbt[i] as number) - d).toBe(7));
+    // DLMO: the dim-light curve rising through 10 pg/mL, 1–3 h before the 23:00 sleep onset
+    // (Burgess et al. 2003 Behav Sleep Med 1:102; Sletten et al. 2010 Front Neurol 1:137: ≈ 2 h)
+    expect(dlmo.length).toBe(3);
+    dlmo.forEach((d) => {
+      expect(23 - (d % 24)).toBeGreaterThan(1);
+      expect(23 - (d % 24)).toBeLessThan(3);
+    });
+    const defs = doc.definitions as Record<string, string>;
+    expect(defs.dlmo_h).toMatch(/without light suppression.*10 pg\/mL/);
+    expect(defs.melatonin_suppression_pct).toMatch(/biological night.*awake/);
     expect((doc.kss_hourly as unknown[]).length).toBe(72);
     // nights 0 and 1 complete and alike (same light each day); night 2 is cut by the end of the run
     const supp = doc.melatonin_suppression_pct as (number | null)[];
@@ -49,7 +59,7 @@ describe('zeitlight simulate', () => {
   });
 
   it('accepts melanopic EDI and each model id', async () => {
-    for (const model of ['fjk99-cubic', 'fjk99-cubic-sf14', 'hfb19-sp']) {
+    for (const model of PACEMAKER_IDS.filter((id) => id !== DEFAULT_PACEMAKER_ID)) {
       const r = await cli(['simulate', join(FIX, 'regular-day-medi.csv'), '--days', '2', '--model', model, '--sleep', join(FIX, 'sleep-23-07.csv'), '--json']);
       expect(r.code).toBe(0);
       expect(JSON.parse(r.out).model).toBe(model);
@@ -104,7 +114,7 @@ describe('zeitlight models', () => {
     const r = await cli(['models', '--json']);
     expect(r.code).toBe(0);
     const doc = JSON.parse(r.out) as { pacemakers: { id: string; source: string; parameters: Record<string, number> }[] };
-    expect(doc.pacemakers.map((p) => p.id)).toEqual(['jfk99-x7', 'fjk99-cubic', 'fjk99-cubic-sf14', 'hfb19-sp']);
+    expect(doc.pacemakers.map((p) => p.id)).toEqual([...PACEMAKER_IDS]);
     expect(doc.pacemakers[0]?.parameters.mu).toBe(0.13);
   });
 });
