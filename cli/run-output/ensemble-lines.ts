@@ -3,13 +3,14 @@
  * default model's headline figures with their range across the models ("+0.42 h (models: +0.30
  * to +0.55 h)"), and every strategy whose rank changes with the model, in words.
  */
-import { valueWithRange, type EnsembleMetric, type PersonaResult, type RunResults } from '../../schedules/run/index.js';
+import { ensembleFigureOf, valueWithRange, type EnsembleMetric, type PersonaResult, type RunResults } from '../../schedules/run/index.js';
 
 const FIGURES: readonly { readonly metric: EnsembleMetric; readonly words: string }[] = [
   { metric: 'mean_phase_shift_h', words: 'phase shift (+ later)' },
   { metric: 'mean_melatonin_suppression_pct', words: 'melatonin suppression' },
   { metric: 'work_hours_kss_ge_7_share', words: 'work hours at KSS ≥ 7' },
   { metric: 'mean_phase_angle_dlmo_to_sleep_h', words: 'DLMO to sleep onset' },
+  { metric: 'misalignment_h_per_day', words: 'misalignment with work and sleep hours (a day)' },
 ];
 
 /** Lines for one persona (indented by two spaces), or none when the ensemble was not run. */
@@ -22,7 +23,7 @@ export function ensembleLines(results: RunResults, persona: PersonaResult): stri
   for (const s of persona.strategies) {
     const parts = FIGURES.flatMap(({ metric, words }) => {
       if (metric === 'mean_phase_shift_h' && s.is_baseline) return [];
-      return [`${words} ${valueWithRange(metric, s.summary[metric], s.ensemble?.[metric])}`];
+      return [`${words} ${valueWithRange(metric, ensembleFigureOf(s, metric), s.ensemble?.[metric])}`];
     });
     lines.push(`    ${s.name}: ${parts.join('; ')}`);
   }

@@ -21,7 +21,7 @@ import type { EyeSeries } from './eye-series.js';
 import { mergedLightSeries } from './light-segments.js';
 import type { LocalClock } from './local-clock.js';
 import { strategyMetrics } from './metrics.js';
-import type { StrategySummary } from './results-types.js';
+import type { StrategyResult, StrategySummary } from './results-types.js';
 import { RunInputError } from './run-input-error.js';
 import { outcomeWithSleepiness } from './sleepiness-outcome.js';
 import { runScenario, type RunInput, type RunOutput } from './run-scenario.js';
@@ -81,17 +81,21 @@ export function cohortPersonaFromRun(out: RunOutput, persona: Persona, modelId: 
 
 /** Strategy summaries (as in results.json) of one occupant, by strategy id. */
 export function runCohortOccupant(base: CohortPersonaBase, person: CohortPerson): Record<string, StrategySummary> {
-  return occupantSummaries(base, person, [HEADLINE_SLEEPINESS_ID]).get(HEADLINE_SLEEPINESS_ID) ?? {};
+  const byStrategy = occupantResults(base, person, [HEADLINE_SLEEPINESS_ID]).get(HEADLINE_SLEEPINESS_ID) ?? {};
+  return Object.fromEntries(Object.entries(byStrategy).map(([id, r]) => [id, r.summary]));
 }
 
+/** What an occupant run keeps per strategy: the summary and the alignment with work and sleep hours. */
+export type OccupantResult = Pick<StrategyResult, 'summary' | 'alignment'>;
+
 /**
- * An occupant's strategy summaries under each of the named sleepiness models, by model and strategy
+ * An occupant's strategy results under each of the named sleepiness models, by model and strategy
  * id: one body-clock run per strategy, which every sleepiness model reads (sleepiness-outcome.ts).
  */
-export function occupantSummaries(base: CohortPersonaBase, person: CohortPerson, sleepiness: readonly SleepinessModelId[]): Map<SleepinessModelId, Record<string, StrategySummary>> {
+export function occupantResults(base: CohortPersonaBase, person: CohortPerson, sleepiness: readonly SleepinessModelId[]): Map<SleepinessModelId, Record<string, OccupantResult>> {
   const persona: Persona = { ...base.persona, intrinsicPeriod_h: person.intrinsicPeriod_h, lightSensitivity: person.lightSensitivity };
   const model = pacemakerFor(persona, base.modelId);
-  const out = new Map<SleepinessModelId, Record<string, StrategySummary>>(sleepiness.map((id) => [id, {}]));
+  const out = new Map<SleepinessModelId, Record<string, OccupantResult>>(sleepiness.map((id) => [id, {}]));
   let initial: SimState | undefined;
   let baselineCbt: number[] | undefined;
   for (const s of base.strategies) {
@@ -102,7 +106,7 @@ export function occupantSummaries(base: CohortPersonaBase, person: CohortPerson,
     for (const id of sleepiness) {
       const m = strategyMetrics({ id: s.id, name: s.name, changes: s.changes, timeline: s.timeline, clock: base.clock, eye: s.eye, clockOutcome: outcomeWithSleepiness(bc.outcome, bc.run, id), rhsEvaluations: bc.run.rhsEvaluations, baselineCbtmin_h: s.isBaseline ? undefined : baselineCbt });
       const byStrategy = out.get(id);
-      if (byStrategy !== undefined) byStrategy[s.id] = m.summary;
+      if (byStrategy !== undefined) byStrategy[s.id] = { summary: m.summary, alignment: m.alignment };
     }
   }
   return out;

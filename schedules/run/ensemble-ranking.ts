@@ -1,34 +1,31 @@
 /**
  * Strategy ranks under each model of an ensemble, and the sentence that says when a rank changes
  * with the model. A persona's strategies (baseline included) are ranked by the recommendation's
- * ordered comparison (recommend.ts): fewer work hours at KSS 7 or more, then less melatonin
- * suppression, then more daytime hours at 250 lx melanopic EDI or more, a difference counting
- * only when it reaches that rule's margin. Rank = 1 + the number of strategies better than this
- * one, so strategies that no margin separates share a rank.
+ * ordered comparison (recommend.ts `compareByRule`): fewer work hours at KSS 7 or more, then less
+ * misalignment with the person's work and sleep hours, then — to break ties — less melatonin
+ * suppression and more daytime light, a difference counting only when it reaches that rule's
+ * margin. Rank = 1 + the number of strategies better than this one, so strategies that no margin
+ * separates share a rank.
  */
-import { DAYTIME_MARGIN_H, KSS_SHARE_MARGIN, SUPPRESSION_MARGIN_PCT } from './recommend.js';
-import type { StrategySummary } from './results-types.js';
+import { compareByRule, ruleFiguresOf } from './recommend.js';
+import type { StrategyResult } from './results-types.js';
 
 export const ENSEMBLE_RANKING_RULE =
   "Strategies, the baseline included, ranked under each model by the recommendation's ordered comparison: fewer work hours at KSS 7 or more (by at least 1 percentage point), " +
-  'then less melatonin suppression per night (by at least 2 points), then more daytime hours at 250 lx melanopic EDI or more (by at least 15 min); strategies no margin separates share a rank.';
+  'then less misalignment of the body clock with work and sleep hours (by at least 15 min a day), then, to break ties, less melatonin suppression per night (by at least 2 points) ' +
+  'and more daytime hours at 250 lx melanopic EDI or more (by at least 15 min); strategies no margin separates share a rank.';
 
-type Ranked = Pick<StrategySummary, 'work_hours_kss_ge_7_share' | 'mean_melatonin_suppression_pct' | 'mean_daytime_hours_ge_250_lx'>;
+/** What a strategy is ranked on: its summary and its alignment with work and sleep hours. */
+export type Ranked = Pick<StrategyResult, 'summary' | 'alignment'>;
 
-/** True when a is better than b by the ordered comparison. */
+/** True when a is better than b by the recommendation's ordered comparison. */
 export function rankedBetter(a: Ranked, b: Ranked): boolean {
-  const kss = (b.work_hours_kss_ge_7_share ?? 0) - (a.work_hours_kss_ge_7_share ?? 0);
-  if (Math.abs(kss) >= KSS_SHARE_MARGIN) return kss > 0;
-  const sup = (b.mean_melatonin_suppression_pct ?? 0) - (a.mean_melatonin_suppression_pct ?? 0);
-  if (Math.abs(sup) >= SUPPRESSION_MARGIN_PCT) return sup > 0;
-  const day = a.mean_daytime_hours_ge_250_lx - b.mean_daytime_hours_ge_250_lx;
-  if (Math.abs(day) >= DAYTIME_MARGIN_H) return day > 0;
-  return false;
+  return compareByRule(ruleFiguresOf(a), ruleFiguresOf(b)) > 0;
 }
 
 /** Rank of each strategy (1 = best), in the order given. */
-export function strategyRanks(summaries: readonly Ranked[]): number[] {
-  return summaries.map((s) => 1 + summaries.filter((t) => t !== s && rankedBetter(t, s)).length);
+export function strategyRanks(results: readonly Ranked[]): number[] {
+  return results.map((s) => 1 + results.filter((t) => t !== s && rankedBetter(t, s)).length);
 }
 
 const ORDINALS = ['first', 'second', 'third', 'fourth', 'fifth', 'sixth', 'seventh', 'eighth', 'ninth', 'tenth'];

@@ -20,6 +20,7 @@ export const ENSEMBLE_FIGURES: Readonly<Record<EnsembleMetric, EnsembleFigureFor
   work_hours_kss_ge_7_share: { label: 'Work hours at KSS ≥ 7', unit: '%', scale: 100, decimals: 0, signed: false },
   mean_phase_angle_dlmo_to_sleep_h: { label: 'DLMO to sleep onset', unit: 'h', scale: 1, decimals: 2, signed: false },
   mean_sleep_duration_h: { label: 'Main sleep', unit: 'h', scale: 1, decimals: 1, signed: false },
+  misalignment_h_per_day: { label: 'Misalignment with work and sleep hours (a day)', unit: 'h', scale: 1, decimals: 1, signed: false },
 };
 
 /** A number as shown for the figure ("+0.42", "−0.10", "37"); "—" for null. */

@@ -13,10 +13,10 @@
  */
 import { isPacemakerId, type PacemakerId } from '../../model/circadian/registry.js';
 import type { SleepinessModelId } from '../../model/circadian/sleepiness-registry.js';
-import { cohortPersonaFromRun, occupantSummaries } from './cohort-occupant.js';
+import { cohortPersonaFromRun, occupantResults, type OccupantResult } from './cohort-occupant.js';
 import { bodyClockOnly, DEFAULT_SLEEPINESS_ID, defaultEnsemble, memberName, pacemakerName, pacemakerSource, sleepinessName, sleepinessShortName, sleepinessSource, type EnsembleMember } from './ensemble-members.js';
 import { ENSEMBLE_RANKING_RULE, rankingSentence, strategyRanks } from './ensemble-ranking.js';
-import { ENSEMBLE_METRICS, type EnsembleMetric, type EnsembleRange, type EnsembleRanking, type EnsembleValue, type PersonaResult, type RunResults, type StrategyEnsemble, type StrategyResult, type StrategySummary } from './results-types.js';
+import { ENSEMBLE_METRICS, type EnsembleMetric, type EnsembleRange, type EnsembleRanking, type EnsembleValue, type PersonaResult, type RunResults, type StrategyEnsemble, type StrategyResult } from './results-types.js';
 import type { RunOutput } from './run-scenario.js';
 
 /** Figures that depend on the sleepiness model; the others depend on the body-clock model only. */
@@ -35,11 +35,11 @@ export interface EnsembleJob {
   readonly sleepiness: readonly SleepinessModelId[];
 }
 
-/** A job's strategy summaries, per sleepiness model, per strategy id. */
+/** A job's strategy results (summary and alignment), per sleepiness model, per strategy id. */
 export interface EnsembleJobResult {
   readonly personaId: string;
   readonly pacemaker: PacemakerId;
-  readonly summaries: ReadonlyMap<SleepinessModelId, ReadonlyMap<string, StrategySummary>>;
+  readonly results: ReadonlyMap<SleepinessModelId, ReadonlyMap<string, OccupantResult>>;
 }
 
 export interface EnsemblePlan {
@@ -80,9 +80,15 @@ export function runEnsembleJob(plan: EnsemblePlan, job: EnsembleJob): EnsembleJo
   const persona = out.light.find((l) => l.personaId === job.personaId && l.strategyId === baseline?.id)?.persona;
   if (persona === undefined) throw new Error(`no persona "${job.personaId}" in the run`);
   const base = cohortPersonaFromRun(out, persona, job.pacemaker);
-  const byModel = occupantSummaries(base, { intrinsicPeriod_h: persona.intrinsicPeriod_h, lightSensitivity: persona.lightSensitivity, habitualMidSleepShift_h: 0 }, job.sleepiness);
-  const summaries = new Map<SleepinessModelId, ReadonlyMap<string, StrategySummary>>([...byModel].map(([id, byStrategy]) => [id, new Map(Object.entries(byStrategy))]));
-  return { personaId: job.personaId, pacemaker: job.pacemaker, summaries };
+  const byModel = occupantResults(base, { intrinsicPeriod_h: persona.intrinsicPeriod_h, lightSensitivity: persona.lightSensitivity, habitualMidSleepShift_h: 0 }, job.sleepiness);
+  const results = new Map<SleepinessModelId, ReadonlyMap<string, OccupantResult>>([...byModel].map(([id, byStrategy]) => [id, new Map(Object.entries(byStrategy))]));
+  return { personaId: job.personaId, pacemaker: job.pacemaker, results };
+}
+
+/** A figure of one strategy result: a `summary` field, or the misalignment from its `alignment`. */
+export function figureOf(r: OccupantResult | undefined, metric: EnsembleMetric): number | null {
+  if (r === undefined) return null;
+  return metric === 'misalignment_h_per_day' ? (r.alignment?.misalignment_h_per_day ?? null) : r.summary[metric];
 }
 
 function range(values: readonly EnsembleValue[]): EnsembleRange {
@@ -101,16 +107,16 @@ function personaEnsemble(p: PersonaResult, members: readonly EnsembleMember[], d
   if (own === undefined) return p;
   const both = !bodyClockOnly(members);
   const pacemakers = [...new Set(members.map((m) => m.pacemaker))];
-  const summaryOf = (m: EnsembleMember, strategy: StrategyResult): StrategySummary | undefined =>
-    sameMember(m, own) ? strategy.summary : done.find((d) => d.personaId === p.id && d.pacemaker === m.pacemaker)?.summaries.get(m.sleepiness)?.get(strategy.id);
+  const resultOf = (m: EnsembleMember, strategy: StrategyResult): OccupantResult | undefined =>
+    sameMember(m, own) ? strategy : done.find((d) => d.personaId === p.id && d.pacemaker === m.pacemaker)?.results.get(m.sleepiness)?.get(strategy.id);
   // a body-clock figure under a pacemaker: from any of its members (they share one body-clock run)
   const withPacemaker = (pacemaker: PacemakerId): EnsembleMember => members.find((m) => m.pacemaker === pacemaker && m.sleepiness === own.sleepiness) ?? members.find((m) => m.pacemaker === pacemaker) ?? own;
   const strategies: StrategyResult[] = p.strategies.map((s) => {
     const ensemble = {} as Record<EnsembleMetric, EnsembleRange>;
     for (const metric of ENSEMBLE_METRICS) {
       const values: EnsembleValue[] = SLEEPINESS_METRICS.has(metric)
-        ? members.map((m) => ({ pacemaker: m.pacemaker, sleepiness: m.sleepiness, value: summaryOf(m, s)?.[metric] ?? null }))
-        : pacemakers.map((pm) => ({ pacemaker: pm, sleepiness: null, value: summaryOf(withPacemaker(pm), s)?.[metric] ?? null }));
+        ? members.map((m) => ({ pacemaker: m.pacemaker, sleepiness: m.sleepiness, value: figureOf(resultOf(m, s), metric) }))
+        : pacemakers.map((pm) => ({ pacemaker: pm, sleepiness: null, value: figureOf(resultOf(withPacemaker(pm), s), metric) }));
       ensemble[metric] = range(values);
     }
     const headlines = s.headlines.map((h) => {
@@ -119,7 +125,7 @@ function personaEnsemble(p: PersonaResult, members: readonly EnsembleMember[], d
     });
     return { ...s, headlines, ensemble: ensemble as StrategyEnsemble };
   });
-  const ranksByMember = members.map((m) => strategyRanks(p.strategies.map((s) => summaryOf(m, s) ?? s.summary)));
+  const ranksByMember = members.map((m) => strategyRanks(p.strategies.map((s) => resultOf(m, s) ?? s)));
   const noun = both ? 'model pairs (body clock and KSS model)' : 'body-clock models';
   const ranking: EnsembleRanking = {
     rule: ENSEMBLE_RANKING_RULE,

@@ -8,7 +8,7 @@ export { RECOMMENDATION_RULE } from './recommend.js';
 export { prepareCohortPersona, runCohortOccupant, type CohortPersonaBase, type CohortPerson } from './cohort-occupant.js';
 export { shiftedSleepSpec, fixedAwakeMinutes } from './cohort-sleep-shift.js';
 export type { WeatherText } from './outdoor-light.js';
-export { withEnsemble, planEnsemble, runEnsembleJob, assembleEnsemble, type EnsemblePlan, type EnsembleJob, type EnsembleJobResult } from './ensemble.js';
+export { withEnsemble, planEnsemble, runEnsembleJob, assembleEnsemble, figureOf as ensembleFigureOf, type EnsemblePlan, type EnsembleJob, type EnsembleJobResult } from './ensemble.js';
 export { defaultEnsemble, memberName, pacemakerName, pacemakerSource, sleepinessName, sleepinessSource, DEFAULT_SLEEPINESS_ID, type EnsembleMember } from './ensemble-members.js';
 export { ENSEMBLE_RANKING_RULE } from './ensemble-ranking.js';
 export { ENSEMBLE_FIGURES, figureNumber, rangeText, valueWithRange } from './ensemble-text.js';

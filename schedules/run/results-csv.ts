@@ -14,7 +14,7 @@
 import Papa from 'papaparse';
 import { ALIGNMENT_FIELDS } from './alignment.js';
 import { LIGHT_SOURCES } from './eye-series.js';
-import { ENSEMBLE_METRICS, type EnsembleMetric, type RunResults, type StrategySummary } from './results-types.js';
+import { ENSEMBLE_METRICS, type EnsembleMetric, type RunResults, type StrategyResult, type StrategySummary } from './results-types.js';
 import type { TimelineLight } from './run-scenario.js';
 import { localIsoAt, type LocalClock } from './local-clock.js';
 import { asleepMinutes, receivedMel } from './received-light.js';
@@ -68,17 +68,22 @@ const SUMMARY_FIELDS = [
 
 const isEnsembleMetric = (f: string): f is EnsembleMetric => (ENSEMBLE_METRICS as readonly string[]).includes(f);
 
+const withRangeColumns = (f: string): string[] => (isEnsembleMetric(f) ? [f, `${f}_ensemble_min`, `${f}_ensemble_max`, `${f}_ensemble_models`] : [f]);
+
+/** A figure's value followed, for an ensemble figure, by its range across the models and the model count. */
+function withRange(s: StrategyResult, f: string, value: number | null): (number | null)[] {
+  if (!isEnsembleMetric(f)) return [value];
+  const e = s.ensemble?.[f];
+  return [value, e?.min ?? null, e?.max ?? null, e === undefined ? null : e.model_count];
+}
+
 export function summaryCsv(results: RunResults): string {
-  const header = ['persona_id', 'strategy_id', 'strategy_name', 'recommended', ...SUMMARY_FIELDS.flatMap((f) => (isEnsembleMetric(f) ? [f, `${f}_ensemble_min`, `${f}_ensemble_max`, `${f}_ensemble_models`] : [f])), ...ALIGNMENT_FIELDS];
+  const header = ['persona_id', 'strategy_id', 'strategy_name', 'recommended', ...SUMMARY_FIELDS.flatMap(withRangeColumns), ...ALIGNMENT_FIELDS.flatMap(withRangeColumns)];
   const rows: (string | number | null)[][] = [];
   for (const p of results.personas) {
     for (const s of p.strategies) {
-      const cells = SUMMARY_FIELDS.flatMap((f) => {
-        if (!isEnsembleMetric(f)) return [s.summary[f]];
-        const e = s.ensemble?.[f];
-        return [s.summary[f], e?.min ?? null, e?.max ?? null, e === undefined ? null : e.model_count];
-      });
-      const alignment = ALIGNMENT_FIELDS.map((f) => s.alignment?.[f] ?? null);
+      const cells = SUMMARY_FIELDS.flatMap((f) => withRange(s, f, s.summary[f]));
+      const alignment = ALIGNMENT_FIELDS.flatMap((f) => withRange(s, f, s.alignment?.[f] ?? null));
       rows.push([p.id, s.id, s.name, p.recommendation.strategy_id === s.id ? 1 : 0, ...cells, ...alignment].map((v) => (v === null ? '' : v)));
     }
   }

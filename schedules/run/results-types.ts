@@ -23,10 +23,11 @@ export interface Headline {
 }
 
 /**
- * Summary fields that carry an ensemble range: the headlines (phase shift, melatonin suppression,
- * share of work hours at KSS ≥ 7) and the sleep-timing figures (DLMO to sleep onset, main sleep).
+ * Figures that carry an ensemble range: the headlines (phase shift, melatonin suppression, share of
+ * work hours at KSS ≥ 7), the sleep-timing figures (DLMO to sleep onset, main sleep) — `summary`
+ * fields — and the misalignment with work and sleep hours (`alignment.misalignment_h_per_day`).
  */
-export const ENSEMBLE_METRICS = ['mean_phase_shift_h', 'mean_melatonin_suppression_pct', 'work_hours_kss_ge_7_share', 'mean_phase_angle_dlmo_to_sleep_h', 'mean_sleep_duration_h'] as const;
+export const ENSEMBLE_METRICS = ['mean_phase_shift_h', 'mean_melatonin_suppression_pct', 'work_hours_kss_ge_7_share', 'mean_phase_angle_dlmo_to_sleep_h', 'mean_sleep_duration_h', 'misalignment_h_per_day'] as const;
 export type EnsembleMetric = (typeof ENSEMBLE_METRICS)[number];
 
 /** One model's value of a figure. `sleepiness` is null where the figure does not depend on the sleepiness model. */

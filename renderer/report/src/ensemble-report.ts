@@ -12,6 +12,7 @@ export const REPORT_ENSEMBLE_METRICS: readonly EnsembleViewMetric[] = [
   { metricId: 'phase-shift', field: 'mean_phase_shift_h', scale: 1 },
   { metricId: 'sleep-timing', field: 'mean_phase_angle_dlmo_to_sleep_h', scale: 1 },
   { metricId: 'sleep-duration', field: 'mean_sleep_duration_h', scale: 1 },
+  { metricId: 'misalignment', field: 'misalignment_h_per_day', scale: 1 },
 ];
 
 /** The view with the ranges of the results' ensemble, or the view unchanged when the run had none. */

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { EnsembleRange } from '../../../schedules/run/index.js';
-import { comparisonRows, ensembleRangeText } from '../charts/comparison-data.js';
+import { comparisonRows, ensembleRangeText, formatNumber } from '../charts/comparison-data.js';
 import { metricEnsemble, withViewEnsemble, type ViewEnsemble } from './ensemble-view.js';
 import type { MetricValue, ResultsView, RunView } from './view-model.js';
 
@@ -42,7 +42,7 @@ describe('ensemble ranges in the results views', () => {
     const cell = rows.find((r) => r.metricId === 'phase-shift')?.cells.find((c) => c.strategyId === 'a');
     expect(cell?.ensemble).toEqual({ min: 0.3, max: 0.55, models: 3 });
     expect(ensembleRangeText(cell!.ensemble!, 2)).toBe('0.30–0.55 across 3 models');
-    expect(ensembleRangeText({ min: -0.55, max: -0.3, models: 3 }, 2)).toBe('-0.55 to -0.30 across 3 models');
+    expect(ensembleRangeText({ min: -0.55, max: -0.3, models: 3 }, 2)).toBe(`${formatNumber(-0.55, 2)} to ${formatNumber(-0.3, 2)} across 3 models`);
     expect(ensembleRangeText({ min: 0.301, max: 0.304, models: 3 }, 2)).toBe('same with all 3 models');
   });
 

@@ -19,6 +19,7 @@ export const ENSEMBLE_VIEW_METRICS: readonly EnsembleViewMetric[] = [
   { metricId: 'kss7', field: 'work_hours_kss_ge_7_share', scale: 100 },
   { metricId: 'sleep-timing', field: 'mean_phase_angle_dlmo_to_sleep_h', scale: 1 },
   { metricId: 'sleep', field: 'mean_sleep_duration_h', scale: 1 },
+  { metricId: 'misalignment', field: 'misalignment_h_per_day', scale: 1 },
 ];
 
 export interface EnsembleCell extends MetricEnsemble {
