@@ -2,10 +2,11 @@
 // loaded in headless Chromium through playwright-core, given the briefing document, and printed
 // with Chromium's header/footer templates. The PDF goes to a temporary name first and is renamed
 // into place, so a failed export never leaves half a file.
-import { mkdtemp, readFile, rename, rm } from 'node:fs/promises';
+import { mkdtemp, readFile, rename, rm, writeFile } from 'node:fs/promises';
 import * as os from 'node:os';
 import * as path from 'node:path';
 import { chromium } from 'playwright-core';
+import { setPdfInfo, type PdfInfo } from '../../schedules/report/pdf-info.js';
 import { CliError } from '../cli-error.js';
 import { VERSION } from '../version.js';
 import { chromiumExecutable } from './chromium-path.js';
@@ -45,6 +46,7 @@ interface PagePrintSettings {
   headerTemplate: string;
   footerTemplate: string;
   margins_mm: { top: number; bottom: number; left: number; right: number };
+  info?: PdfInfo;
 }
 
 function isResultsDocument(value: unknown): boolean {
@@ -117,6 +119,8 @@ export async function writeBriefingPdf(options: BriefingPdfOptions): Promise<{ p
       outline: true,
       tagged: true,
     });
+    // Chromium names itself as the creator and gives no subject: the page's document information replaces it.
+    if (settings.info !== undefined) await writeFile(temp, setPdfInfo(new Uint8Array(await readFile(temp)), settings.info));
     await rename(temp, outPath);
     const bytes = (await readFile(outPath)).length;
     return { path: outPath, bytes };

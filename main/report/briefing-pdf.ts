@@ -5,6 +5,7 @@
 // prints through headless Chromium. Electron is injected (no runtime import), as elsewhere in main.
 import type { WebContents } from 'electron';
 import { APP_SCHEME, APP_HOST } from '../security/app-protocol.js';
+import { setPdfInfo, type PdfInfo } from '../../schedules/report/pdf-info.js';
 
 export const REPORT_PAGE_URL = `${APP_SCHEME}://${APP_HOST}/report/index.html`;
 
@@ -24,6 +25,7 @@ interface PagePrintSettings {
   headerTemplate: string;
   footerTemplate: string;
   margins_mm: { top: number; bottom: number; left: number; right: number };
+  info?: PdfInfo;
 }
 
 /** Options for the hidden window that draws the briefing (no preload: the page needs no bridge). */
@@ -82,7 +84,8 @@ export async function printBriefingPdf(
       generateDocumentOutline: true,
     });
     onProgress(1, 'Done');
-    return new Uint8Array(pdf);
+    // printToPDF names the browser as the creator: the page's document information replaces it.
+    return settings.info === undefined ? new Uint8Array(pdf) : setPdfInfo(new Uint8Array(pdf), settings.info);
   } finally {
     window.destroy();
   }

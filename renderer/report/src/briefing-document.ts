@@ -64,6 +64,8 @@ export interface PrintSettings {
   readonly headerTemplate: string;
   readonly footerTemplate: string;
   readonly margins_mm: { readonly top: number; readonly bottom: number; readonly left: number; readonly right: number };
+  /** Document information the printer writes into the PDF (schedules/report/pdf-info.ts). */
+  readonly info?: { readonly title: string; readonly subject: string; readonly creator: string; readonly producer: string };
 }
 
 function isRecord(value: unknown): value is Record<string, unknown> {

@@ -26,7 +26,7 @@ function render(input: unknown): void {
   if (!facts.ok) return fail(facts.message);
   const container = document.getElementById('root');
   if (container === null) return fail('report page: no #root element');
-  document.title = `${facts.facts.name} — Zeitlight briefing`;
+  document.title = `${facts.facts.name} — lighting and body-clock briefing`;
   document.documentElement.dataset.paper = checked.document.paper;
   root ??= createRoot(container);
   try {
@@ -37,7 +37,7 @@ function render(input: unknown): void {
     return fail(`report page: ${error instanceof Error ? error.message : String(error)}`);
   }
   void document.fonts.ready.then(() => {
-    window.__zeitlightPrint = printSettings(facts.facts.name, checked.document.paper, checked.document.generatedOn);
+    window.__zeitlightPrint = printSettings(facts.facts.name, checked.document.paper, checked.document.generatedOn, checked.document.zeitlightVersion);
   });
 }
 

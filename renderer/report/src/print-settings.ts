@@ -9,8 +9,14 @@ export function escapeHtml(text: string): string {
 
 const TEMPLATE_STYLE = "font-family:'DejaVu Sans',sans-serif;font-size:7.5pt;color:#6b7685;width:100%;margin:0 16mm;display:flex;justify-content:space-between;";
 
-export function printSettings(scenarioName: string, paper: PaperSize, generatedOn: string): PrintSettings {
+/** The PDF's document information: title and subject name the scenario, the product is the creator. */
+export function documentInfo(scenarioName: string, zeitlightVersion: string): NonNullable<PrintSettings['info']> {
+  return { title: `${scenarioName} — lighting and body-clock briefing`, subject: scenarioName, creator: `Zeitlight ${zeitlightVersion}`, producer: `Zeitlight ${zeitlightVersion} (printed with Chromium)` };
+}
+
+export function printSettings(scenarioName: string, paper: PaperSize, generatedOn: string, zeitlightVersion = ''): PrintSettings {
   return {
+    info: documentInfo(scenarioName, zeitlightVersion),
     status: 'ready',
     message: '',
     paper,
