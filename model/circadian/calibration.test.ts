@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { alphaOpicQuantities, illuminantD65, scaleToIlluminance } from '../photometry/alpha-opic.js';
+import { alphaOpicDer, alphaOpicQuantities, illuminantD65, scaleToIlluminance } from '../photometry/alpha-opic.js';
 import { illuminantA } from '../sources/planckian.js';
 import { calibrationMelanopicDer, nativeLightSeries, nativeLuxFromMelEdi } from './calibration.js';
 import { lightFromSteps } from './light-series.js';
@@ -27,8 +27,9 @@ describe('melanopic calibration of the native input', () => {
     const cool = alphaOpicQuantities(atMelEdi(illuminantD65()));
     expect(warm.alpha_opic.mel.edi_lx).toBeCloseTo(100, 6);
     expect(cool.alpha_opic.mel.edi_lx).toBeCloseTo(100, 6);
-    // photopic lux differ by the ratio of the melanopic DERs (A ≈ 0.45 from memory; D65 = 1 by the CIE S 026 definition)
-    expect(warm.illuminance_lx / cool.illuminance_lx).toBeGreaterThan(2);
+    // their photopic lux differ by the ratio of the melanopic DERs (D65 = 1 by the CIE S 026 definition; A ≈ 0.50)
+    expect(warm.illuminance_lx / cool.illuminance_lx).toBeCloseTo(1 / alphaOpicDer(illuminantA()).mel, 6);
+    expect(warm.illuminance_lx / cool.illuminance_lx).toBeGreaterThan(1.9);
     const input = (melEdi: number) => nativeLightSeries(lightFromSteps([0], [melEdi], 'mel_edi_lx', 24)).level[0] as number;
     expect(input(warm.alpha_opic.mel.edi_lx)).toBeCloseTo(input(cool.alpha_opic.mel.edi_lx), 6);
     expect(input(cool.alpha_opic.mel.edi_lx)).toBeCloseTo(100 / calibrationMelanopicDer(), 6);

@@ -182,7 +182,16 @@ export interface RunResults {
     readonly weather: 'sky-model' | 'weather-file';
     readonly sky_by_day: readonly (string | null)[];
   };
-  readonly models: { readonly pacemaker: string; readonly melatonin: string; readonly sleepiness: string; readonly light_input: string };
+  readonly models: {
+    readonly pacemaker: string;
+    readonly melatonin: string;
+    readonly sleepiness: string;
+    readonly light_input: string;
+    /** What `dlmo` / `dlmo_h` mean: the dim-light melatonin onset (docs/results-format.md). */
+    readonly dlmo_definition: string;
+    /** What the melatonin suppression figures mean: their window (docs/results-format.md). */
+    readonly melatonin_suppression_definition: string;
+  };
   readonly thresholds: {
     readonly daytime_mel_edi_lx: number;
     readonly pre_sleep_mel_edi_lx: number;

@@ -7,6 +7,7 @@
 import { sunTimes } from '../../model/daylight/index.js';
 import type { PacemakerId } from '../../model/circadian/registry.js';
 import { DEFAULT_PACEMAKER_ID } from '../../model/circadian/registry.js';
+import { DLMO_DEFINITION, SUPPRESSION_DEFINITION } from '../../model/circadian/melatonin-nights.js';
 import { HEADLINE_SLEEPINESS_ID, SLEEPINESS_MODELS } from '../../model/circadian/sleepiness-registry.js';
 import { importLightLog } from '../lightlog/import-light-log.js';
 import { logToMinuteSeries, type MinuteLightSeries } from '../lightlog/log-to-minutes.js';
@@ -176,7 +177,7 @@ export function runScenario(input: RunInput): RunOutput {
       weather: scenario.site.weather.kind === 'file' ? 'weather-file' : 'sky-model',
       sky_by_day: outdoor.skyByDay,
     },
-    models: { pacemaker: modelId, melatonin: 'St Hilaire et al. 2007 (J Theor Biol)', sleepiness: SLEEPINESS_MODELS[HEADLINE_SLEEPINESS_ID].name, light_input: 'melanopic EDI at the eye (CIE S 026), converted to the pacemaker calibration source' },
+    models: { pacemaker: modelId, melatonin: 'St Hilaire et al. 2007 (J Theor Biol)', sleepiness: SLEEPINESS_MODELS[HEADLINE_SLEEPINESS_ID].name, light_input: 'melanopic EDI at the eye (CIE S 026), converted to the pacemaker calibration source', dlmo_definition: DLMO_DEFINITION, melatonin_suppression_definition: SUPPRESSION_DEFINITION },
     thresholds: {
       daytime_mel_edi_lx: DAYTIME_MEL_EDI_LX,
       pre_sleep_mel_edi_lx: PRE_SLEEP_MEL_EDI_LX,
