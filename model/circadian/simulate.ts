@@ -1,12 +1,14 @@
 /**
  * Body-clock simulation driver.
  *
- * Pass 1 — pacemaker + its Process L (and, for free sleep, the HCL homeostat) with the chosen
- * integrator (odex by default). The time axis is split at every discontinuity of the input
- * (light breakpoints, prescribed sleep/wake, alarms, predicted sleep switches); between them the
- * right-hand side is smooth (constant light or a smooth light function), so the adaptive solver
- * takes long steps and restarts only where it must. Phase events are located on the dense
- * output by bisection: the x minimum (root of dx/dt), the melatonin synthesis angles and, for
+ * Pass 1 — pacemaker + its Process L (and, for free sleep, the HCL homeostat). By default the
+ * time axis is split only where sleep state changes (prescribed sleep/wake, alarms, wake windows,
+ * predicted sleep switches) and each stretch is integrated through every change of light
+ * (through-light.ts: Process L in closed form, the oscillator by the drive-moment stepper). With
+ * an explicit integrator (odex at other tolerances, RK4) or `method: 'restart-at-light-changes'`
+ * the axis is also split at every light breakpoint, so the right-hand side is smooth in each
+ * piece (the reference method). Phase events are located on the dense output by bisection: the
+ * x minimum (root of dx/dt; one per cycle, the deepest), the melatonin synthesis angles and, for
  * free sleep, the threshold crossings.
  * Pass 2 — plasma melatonin from the synthesis switch times (melatonin-pass.ts).
  * Pass 3 — sleepiness states and the KSS of every sleepiness model on the sample grid
@@ -22,6 +24,7 @@ import { calibrationEyelidTransmission, receivedLightSeries } from './eyes-close
 import { scaledLightSeries, segmentIndexAt, type LightSeries } from './light-series.js';
 import { cycleAngleAtTime, cycleTimeAtAngle, darkLimitCycle, equivalentState, type LimitCycleTable } from './limit-cycle.js';
 import { MARKER_REFINE_MAX_SPAN_H, refinedMinimum } from './marker-refine.js';
+import { integrateThroughLight, minimumThroughLight, type ThroughLightPiece } from './through-light.js';
 import { melatoninPass, type MelatoninNight, type MelatoninState, type SynthesisSwitch } from './melatonin-pass.js';
 import { ST_HILAIRE_MELATONIN as MEL } from './melatonin-sthilaire.js';
 import type { Pacemaker } from './pacemaker.js';
@@ -39,8 +42,13 @@ const DEG = Math.PI / 180;
 const BISECTION_ITERATIONS = 40;
 /** Tolerance for landing on a light breakpoint (h, ≈ 4 ns). */
 const BREAK_TOL_H = 1e-12;
-/** Two x minima closer than this are one event (h). */
-const MIN_MARKER_SPACING_H = 2;
+/**
+ * Minima of x closer than this belong to one cycle, and the deepest is the day's marker (h).
+ * Light in the biological night (a bright break on a night shift) can make x turn up for a few
+ * minutes and down again, a local minimum hours before or after the cycle's lowest point;
+ * consecutive cycles' minima are about 24 h apart (at most a few hours less after a shift).
+ */
+const MARKER_CYCLE_H = 8;
 
 export interface SimulationOptions {
   readonly model: Pacemaker;
@@ -65,7 +73,14 @@ export interface SimulationOptions {
    * that of the calibration source CIE FL2 (0.30 %, eyes-closed-light.ts).
    */
   readonly eyelidTransmission?: number;
+  /**
+   * Integrator of the restart-at-every-light-change method. When given (odex at other
+   * tolerances, fixed-step RK4), the body clock restarts it at every change of light; by
+   * default the body clock is integrated through light (through-light.ts).
+   */
   readonly integrator?: Integrator;
+  /** 'through-light' (default without `integrator`) or 'restart-at-light-changes' (the reference). */
+  readonly method?: 'through-light' | 'restart-at-light-changes';
   /** Spacing of stored samples (h); default 0.25. */
   readonly sampleStep_h?: number;
   /** Sleepiness model whose KSS fills `samples.kss` (default the headline model). */
@@ -240,6 +255,8 @@ export function simulate(opts: SimulationOptions): SimulationRun {
   // Wake windows (free sleep): held awake inside, a possible sleep onset at each end.
   const wakeWindows = opts.sleep.mode === 'free' ? normalisedEpisodes(opts.sleep.wakeWindows ?? [], 'wake window') : [];
   const integrator = opts.integrator ?? createOdexIntegrator();
+  const throughLight = (opts.method ?? (opts.integrator === undefined ? 'through-light' : 'restart-at-light-changes')) === 'through-light';
+  let throughLightStep: number | undefined;
   const sampleStep = opts.sampleStep_h ?? 0.25;
   const t0 = opts.initial?.t_h ?? opts.start_h ?? 0;
   const tEnd = opts.end_h;
@@ -293,11 +310,15 @@ export function simulate(opts: SimulationOptions): SimulationRun {
     const h = yv[hclIndex] as number;
     return awakeNow ? h - (hcl.upper + c) : hcl.lower + c - h;
   };
-  const addMarker = (tm: number) => {
-    const last = xmin[xmin.length - 1];
-    if (last !== undefined && tm - last < MIN_MARKER_SPACING_H) return;
-    xmin.push(tm);
-    cbtmin.push(tm + model.marker.cbtminOffset_h);
+  /** Candidate x minima (time, x there); one per cycle is kept, the deepest (MARKER_CYCLE_H). */
+  const minima: { t: number; x: number }[] = [];
+  const addMarker = (tm: number, depth = 0) => {
+    const last = minima[minima.length - 1];
+    if (last !== undefined && tm - last.t < MARKER_CYCLE_H) {
+      if (depth < last.x) minima[minima.length - 1] = { t: tm, x: depth };
+      return;
+    }
+    minima.push({ t: tm, x: depth });
   };
   const addSample = (t: number, get: (i: number) => number) => {
     samples.t_h.push(t);
@@ -331,7 +352,7 @@ export function simulate(opts: SimulationOptions): SimulationRun {
     const wake = awake ? 1 : 0;
     const held = free && awake && heldAwakeAt(t);
     const nextEp = free ? undefined : nextPrescribedTransition(episodes, t);
-    let tStop = Math.min(tEnd, nextLightBreak(lit, t), nextEp?.t_h ?? Infinity);
+    let tStop = Math.min(tEnd, throughLight ? Infinity : nextLightBreak(lit, t), nextEp?.t_h ?? Infinity);
     if (free && !awake) tStop = Math.min(tStop, nextAlarm(t));
     if (free) tStop = Math.min(tStop, nextWindowEdge(t));
 
@@ -341,6 +362,14 @@ export function simulate(opts: SimulationOptions): SimulationRun {
       model.derivatives(yq, I, dydt);
       if (hclIndex >= 0) dydt[hclIndex] = (hcl.mu * wake - (yq[hclIndex] as number)) / hcl.chi_h;
       return dydt;
+    };
+    const piece: ThroughLightPiece = {
+      model,
+      light: lit,
+      gain: sens,
+      ...(periodic ? { period_h: 24 } : {}),
+      size,
+      homeostatRate: hclIndex >= 0 ? (yq) => (hcl.mu * wake - (yq[hclIndex] as number)) / hcl.chi_h : null,
     };
     const pair = [0, 0];
     const angleAt = (dense: Dense, tq: number) => {
@@ -393,7 +422,7 @@ export function simulate(opts: SimulationOptions): SimulationRun {
         const delta = Math.min(1e-4, (tNew - tOld) / 4);
         const sa = Math.sign(dense(0, tOld + delta) - dense(0, tOld));
         const sb = Math.sign(dense(0, tNew) - dense(0, tNew - delta));
-        if (lastDxSign < 0 && sa > 0 && dense(0, tOld) < 0) addMarker(tOld);
+        if (lastDxSign < 0 && sa > 0 && dense(0, tOld) < 0) addMarker(tOld, dense(0, tOld));
         else if (sa < 0 && sb > 0) {
           const der = (tq: number) => dense(0, tq + delta) - dense(0, tq - delta);
           let lo = tOld + delta;
@@ -405,8 +434,17 @@ export function simulate(opts: SimulationOptions): SimulationRun {
           }
           // the interpolant finds the step; the piece integrated again places the minimum
           const fromPiece = tOld - tPiece <= MARKER_REFINE_MAX_SPAN_H;
-          const tm = (fromPiece ? refinedMinimum(rhs, tPiece, yPiece, tNew, 0, tOld) : refinedMinimum(rhs, tOld, yA, tNew, 0)) ?? 0.5 * (lo + hi);
-          if (dense(0, tm) < 0) addMarker(tm);
+          let tm: number;
+          let depth: number;
+          if (throughLight) {
+            const refined = minimumThroughLight(piece, tOld, yA, tNew, 0);
+            tm = refined?.t ?? 0.5 * (lo + hi);
+            depth = refined?.value ?? dense(0, tm);
+          } else {
+            tm = (fromPiece ? refinedMinimum(rhs, tPiece, yPiece, tNew, 0, tOld) : refinedMinimum(rhs, tOld, yA, tNew, 0)) ?? 0.5 * (lo + hi);
+            depth = dense(0, tm);
+          }
+          if (depth < 0) addMarker(tm, depth);
         }
         lastDxSign = sb;
       } else {
@@ -438,7 +476,12 @@ export function simulate(opts: SimulationOptions): SimulationRun {
     };
 
     const dense = free ? undefined : [0, 1];
-    const res = integrator.integrate(rhs, t, y, tStop, observer, dense);
+    let res;
+    if (throughLight) {
+      const through = integrateThroughLight(piece, t, y, tStop, observer, throughLightStep);
+      throughLightStep = through.nextStep;
+      res = through;
+    } else res = integrator.integrate(rhs, t, y, tStop, observer, dense);
     integrations++;
     rhsEvals += res.rhsEvaluations;
     const tNew = res.t;
@@ -460,6 +503,10 @@ export function simulate(opts: SimulationOptions): SimulationRun {
     t = tNew;
   }
   if (!awake && tEnd > sleepStart) sleepEpisodes.push({ start_h: sleepStart, end_h: tEnd });
+  for (const m of minima) {
+    xmin.push(m.t);
+    cbtmin.push(m.t + model.marker.cbtminOffset_h);
+  }
 
   // Pass 2: melatonin over the same period, with the light received under the sleep just found
   // (open eyes awake, closed eyelids asleep).
