@@ -312,6 +312,21 @@ describe.skipIf(!available)('results views of the demo run', () => {
     expect(tunable?.[6]).toMatch(/than baseline|no change/);
   });
 
+  it('shows each headline value’s range across the published models once the ensemble has run after the results', async () => {
+    await s.page.getByRole('button', { name: 'Compare', exact: true }).click();
+    await s.page.getByRole('combobox', { name: 'Person' }).selectOption('desk-worker');
+    const cell = s.page.locator('td[data-metric="phase-shift"][data-strategy="office-tunable-white"]');
+    // The ensemble runs in the worker after the default models' results; its ranges stay once shown.
+    await poll(() => cell.getAttribute('data-ensemble-min'), { timeout: RESULTS_TIMEOUT_MS, message: 'the ranges across the models never arrived' }).not.toBeNull();
+    const [value, min, max, models] = await Promise.all(['data-value', 'data-ensemble-min', 'data-ensemble-max', 'data-ensemble-models'].map(async (a) => Number(await cell.getAttribute(a))));
+    expect(min).toBeLessThanOrEqual(value!);
+    expect(max).toBeGreaterThanOrEqual(value!);
+    expect(models).toBeGreaterThanOrEqual(3);
+    await expect(cell.locator('.ensemble-range').innerText()).resolves.toMatch(/across \d+ models|same with all \d+ models/);
+    await expect(s.page.locator('.ensemble-note').first().innerText()).resolves.toContain('Hannay et al. 2019');
+    await screenshot(s.page, 'results-compare-ensemble');
+  }, 2 * RESULTS_TIMEOUT_MS);
+
   it('prints the briefing from the report page with the current results, showing export progress', async () => {
     const [popup] = await Promise.all([s.page.waitForEvent('popup', { timeout: 30_000 }), s.page.getByRole('button', { name: 'Briefing PDF' }).click()]);
     await popup.waitForFunction(() => (globalThis as { __zeitlightPrint?: { status: string } }).__zeitlightPrint?.status === 'ready', null, { timeout: 60_000 });
