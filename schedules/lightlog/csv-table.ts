@@ -40,18 +40,35 @@ export function guessDelimiter(text: string): string {
   return best;
 }
 
+/**
+ * Calls `visit` for each row that is neither blank nor a comment, in file order, without keeping
+ * the rows (long logs stay small in memory); `visit` returns false to stop.
+ */
+export function forEachCsvRow(text: string, delimiter: string, visit: (row: CsvRow) => boolean | void): void {
+  // papaparse gives one entry per record; a quoted cell may span lines, so count the newlines.
+  let line = 1;
+  Papa.parse<string[]>(text, {
+    header: false,
+    skipEmptyLines: false,
+    delimiter,
+    step: (result, parser) => {
+      const cells = result.data;
+      const start = line;
+      for (const c of cells) for (let i = c.indexOf('\n'); i >= 0; i = c.indexOf('\n', i + 1)) line++;
+      line++;
+      const blank = cells.every((c) => c.trim() === '');
+      if (blank || (cells[0] ?? '').trim().startsWith('#')) return;
+      if (visit({ cells, line: start }) === false) parser.abort();
+    },
+  });
+}
+
 export function readCsvTable(text: string): CsvTable {
   const delimiter = guessDelimiter(text);
-  const parsed = Papa.parse<string[]>(text, { header: false, skipEmptyLines: false, delimiter });
-  // papaparse gives one entry per record; a quoted cell may span lines, so count the newlines.
   const rows: CsvRow[] = [];
-  let line = 1;
-  for (const cells of parsed.data) {
-    const first = (cells[0] ?? '').trim();
-    const blank = cells.every((c) => c.trim() === '');
-    if (!blank && !first.startsWith('#')) rows.push({ cells, line });
-    line += 1 + cells.reduce((n, c) => n + (c.match(/\r\n|\r|\n/g)?.length ?? 0), 0);
-  }
+  forEachCsvRow(text, delimiter, (row) => {
+    rows.push(row);
+  });
   return { delimiter, decimalComma: delimiter !== ',', header: rows[0], body: rows.slice(1) };
 }
 

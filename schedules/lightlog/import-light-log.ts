@@ -8,9 +8,9 @@
  */
 import type { FillRule, TimestampFormat } from '../schema/light-log-schema.js';
 import type { LightLogSpec } from '../schema/scenario-types.js';
-import { readCsvTable, readNumber } from './csv-table.js';
+import { forEachCsvRow, guessDelimiter, readNumber, type CsvRow } from './csv-table.js';
 import { describeGap } from './gap-notes.js';
-import { detectTimestampFormat, parseTimestamp } from './timestamp.js';
+import { detectTimestampFormat, timestampReader } from './timestamp.js';
 
 export interface LogSample {
   readonly utc_ms: number;
@@ -90,16 +90,38 @@ function fail(problems: LogProblem[], message: string, fix: string, line: number
   return { ok: false, log: undefined, problems };
 }
 
-export function importLightLog(text: string, options: LightLogOptions): LightLogImport {
-  const problems: LogProblem[] = [];
-  const { decimalComma, header: headerRow, body } = readCsvTable(text);
-  if (headerRow === undefined) return fail(problems, 'the file is empty', 'Export the log again as CSV with a header line.');
-  const header = headerRow.cells.map((h) => h.trim());
-  if (body.length === 0) return fail(problems, 'the file has a header but no readings', 'Export the log again with its readings.', headerRow.line);
+/** Growable column of numbers (typed storage: a long log keeps 8 bytes per reading and column). */
+class NumberColumn {
+  private data = new Float64Array(1024);
+  length = 0;
+  push(v: number): void {
+    if (this.length === this.data.length) {
+      const bigger = new Float64Array(this.data.length * 2);
+      bigger.set(this.data);
+      this.data = bigger;
+    }
+    this.data[this.length++] = v;
+  }
+  at(i: number): number {
+    return this.data[i] ?? Number.NaN;
+  }
+}
 
+interface Columns {
+  readonly header: readonly string[];
+  readonly headerLine: number;
+  readonly tsCol: number;
+  readonly valueCols: readonly { name: string; index: number }[];
+  readonly wornCol: number;
+}
+
+/** The timestamp, value and worn columns named in the options or found by their names; errors go into `problems`. */
+function findColumns(headerRow: CsvRow, options: LightLogOptions, problems: LogProblem[]): Columns | undefined {
+  const header = headerRow.cells.map((h) => h.trim());
   const tsCol = findColumn(header, options.timestampColumn, [/^(date[ _-]?)?time(stamp)?$/i, /time|date/i]);
   if (tsCol < 0) {
-    return fail(problems, options.timestampColumn !== undefined ? `there is no column "${options.timestampColumn}"` : 'no timestamp column found', `Name the timestamp column in the light log's "timestampColumn"; the columns are: ${header.join(', ')}.`, headerRow.line);
+    fail(problems, options.timestampColumn !== undefined ? `there is no column "${options.timestampColumn}"` : 'no timestamp column found', `Name the timestamp column in the light log's "timestampColumn"; the columns are: ${header.join(', ')}.`, headerRow.line);
+    return undefined;
   }
   const q = options.quantity;
   const valueCols: { name: string; index: number }[] = [];
@@ -114,90 +136,168 @@ export function importLightLog(text: string, options: LightLogOptions): LightLog
   else for (const c of q.columns) need(c, [], `channel ${c}`);
   const wornCol = options.wornColumn !== undefined ? need(options.wornColumn, [], 'worn') : -1;
   if (wornCol >= 0) valueCols.pop();
-  if (problems.some((p) => p.severity === 'error')) return { ok: false, log: undefined, problems };
+  if (problems.some((p) => p.severity === 'error')) return undefined;
+  return { header, headerLine: headerRow.line, tsCol, valueCols, wornCol };
+}
 
-  // Timestamp format.
-  let format: Exclude<TimestampFormat, 'auto'>;
-  if (options.timestampFormat === 'auto') {
-    const detected = detectTimestampFormat(body.slice(0, 200).map((r) => r.cells[tsCol] ?? ''));
-    if (detected.format === undefined) return fail(problems, `cannot tell the timestamp format: ${detected.note ?? ''}`, 'Set "timestampFormat" to iso, epoch-s, epoch-ms, ymd, dmy or mdy.', null, header[tsCol] ?? null);
-    format = detected.format;
-    if (detected.note !== undefined) problems.push({ severity: 'warning', line: null, column: header[tsCol] ?? null, message: detected.note, fix: 'Set "timestampFormat" to "mdy" if the file writes the month first.' });
-  } else format = options.timestampFormat;
+/** Rows looked at to tell the timestamp format when it is "auto". */
+const FORMAT_SAMPLE_ROWS = 200;
 
-  const raw: { utc_ms: number; photopic_lx: number | null; melanopicEdi_lx: number | null; worn: boolean; line: number }[] = [];
+export function importLightLog(text: string, options: LightLogOptions): LightLogImport {
+  const problems: LogProblem[] = [];
+  const delimiter = guessDelimiter(text);
+  const decimalComma = delimiter !== ',';
+  const q = options.quantity;
+
+  let cols: Columns | undefined;
+  let headerSeen = false;
+  let bodyRows = 0;
+  let read: ((text: string) => number | undefined) | undefined;
+  let format: Exclude<TimestampFormat, 'auto'> | undefined = options.timestampFormat === 'auto' ? undefined : options.timestampFormat;
+  const pending: CsvRow[] = [];
+  // Readings, in file order.
+  const utc = new NumberColumn();
+  const lux = new NumberColumn();
+  const mel = new NumberColumn();
+  const worn = new NumberColumn();
+  const lineOf = new NumberColumn();
   let bad = 0;
   const rowProblem = (line: number, column: string | null, message: string, fix: string): void => {
     bad++;
     if (bad <= MAX_LISTED_ROW_PROBLEMS) problems.push({ severity: 'warning', line, column, message, fix });
   };
-  for (const r of body) {
-    const tsText = r.cells[tsCol] ?? '';
-    const t = parseTimestamp(tsText, format, options.timeZone);
+
+  const takeRow = (c: Columns, readTime: (text: string) => number | undefined, fmt: string, r: CsvRow): void => {
+    const tsText = r.cells[c.tsCol] ?? '';
+    const t = readTime(tsText);
     if (t === undefined) {
-      rowProblem(r.line, header[tsCol] ?? null, `timestamp "${tsText.slice(0, 40)}" cannot be read as ${format}`, 'The line is skipped; fix or delete it.');
-      continue;
+      rowProblem(r.line, c.header[c.tsCol] ?? null, `timestamp "${tsText.trim().slice(0, 40)}" cannot be read as ${fmt}`, 'The line is skipped; fix or delete it.');
+      return;
     }
-    const values = valueCols.map((c) => readNumber(r.cells[c.index], decimalComma));
-    const badIndex = values.findIndex((v) => !Number.isFinite(v) || v < 0);
+    let badIndex = -1;
+    const values = c.valueCols.map((col, k) => {
+      const v = readNumber(r.cells[col.index], decimalComma);
+      if (badIndex < 0 && (!Number.isFinite(v) || v < 0)) badIndex = k;
+      return v;
+    });
     if (badIndex >= 0) {
-      const col = valueCols[badIndex];
-      rowProblem(r.line, col?.name ?? null, `"${(col === undefined ? '' : (r.cells[col.index] ?? '')).slice(0, 20)}" is not a light reading (a number ≥ 0)`, 'The line is skipped and counted as a gap.');
-      continue;
+      const col = c.valueCols[badIndex];
+      rowProblem(r.line, col?.name ?? null, `"${(col === undefined ? '' : (r.cells[col.index] ?? '')).trim().slice(0, 20)}" is not a light reading (a number ≥ 0)`, 'The line is skipped and counted as a gap.');
+      return;
     }
-    let lux: number | null = null;
-    let mel: number | null = null;
-    if (q.kind === 'photopic-lux') lux = values[0] ?? null;
-    else if (q.kind === 'melanopic-edi') mel = values[0] ?? null;
+    let l = Number.NaN;
+    let m = Number.NaN;
+    if (q.kind === 'photopic-lux') l = values[0] ?? Number.NaN;
+    else if (q.kind === 'melanopic-edi') m = values[0] ?? Number.NaN;
     else {
       const dot = (k: readonly number[]) => Math.max(0, values.reduce((acc, v, i) => acc + v * (k[i] ?? 0), 0));
-      lux = dot(q.calibration.photopic_lx);
-      mel = dot(q.calibration.melanopicEdi_lx);
+      l = dot(q.calibration.photopic_lx);
+      m = dot(q.calibration.melanopicEdi_lx);
+      if (!Number.isFinite(l) || !Number.isFinite(m)) {
+        rowProblem(r.line, null, 'the calibration gives a light level too large to hold', 'The line is skipped; check the calibration coefficients.');
+        return;
+      }
     }
-    raw.push({ utc_ms: t, photopic_lx: lux, melanopicEdi_lx: mel, worn: wornCol < 0 || !isNotWorn(r.cells[wornCol]), line: r.line });
-  }
+    utc.push(t);
+    lux.push(l);
+    mel.push(m);
+    worn.push(c.wornCol < 0 || !isNotWorn(r.cells[c.wornCol]) ? 1 : 0);
+    lineOf.push(r.line);
+  };
+
+  /** Decides the format from the rows held back, then reads them. */
+  const settleFormat = (c: Columns): boolean => {
+    if (format === undefined) {
+      const detected = detectTimestampFormat(pending.slice(0, FORMAT_SAMPLE_ROWS).map((r) => r.cells[c.tsCol] ?? ''));
+      if (detected.format === undefined) {
+        fail(problems, `cannot tell the timestamp format: ${detected.note ?? ''}`, 'Set "timestampFormat" to iso, epoch-s, epoch-ms, ymd, dmy or mdy.', null, c.header[c.tsCol] ?? null);
+        return false;
+      }
+      format = detected.format;
+      if (detected.note !== undefined) problems.push({ severity: 'warning', line: null, column: c.header[c.tsCol] ?? null, message: detected.note, fix: 'Set "timestampFormat" to "mdy" if the file writes the month first.' });
+    }
+    read = timestampReader(format, options.timeZone);
+    for (const r of pending) takeRow(c, read, format, r);
+    pending.length = 0;
+    return true;
+  };
+
+  let failed = false;
+  forEachCsvRow(text, delimiter, (row) => {
+    if (!headerSeen) {
+      headerSeen = true;
+      cols = findColumns(row, options, problems);
+      if (cols === undefined) return false;
+      return true;
+    }
+    bodyRows++;
+    if (cols === undefined) return false;
+    if (read === undefined) {
+      pending.push(row);
+      if (pending.length >= FORMAT_SAMPLE_ROWS && !settleFormat(cols)) {
+        failed = true;
+        return false;
+      }
+      return true;
+    }
+    takeRow(cols, read, format ?? 'iso', row);
+    return true;
+  });
+  if (!headerSeen) return fail(problems, 'the file is empty', 'Export the log again as CSV with a header line.');
+  if (cols === undefined || failed) return { ok: false, log: undefined, problems };
+  if (bodyRows === 0) return fail(problems, 'the file has a header but no readings', 'Export the log again with its readings.', cols.headerLine);
+  if (read === undefined && !settleFormat(cols)) return { ok: false, log: undefined, problems };
+  const c = cols;
+  const header = c.header;
+  const tsCol = c.tsCol;
+
   if (bad > MAX_LISTED_ROW_PROBLEMS) problems.push({ severity: 'warning', line: null, column: null, message: `${bad - MAX_LISTED_ROW_PROBLEMS} more unreadable line(s) not listed`, fix: 'Check the export settings of the logger software.' });
-  if (raw.length < 2 || bad > MAX_BAD_ROW_SHARE * body.length) {
-    return fail(problems, `only ${raw.length} of ${body.length} lines hold a readable time and light value`, 'Check that this is a light-logger CSV and that the timestamp format and columns are right.');
+  const n = utc.length;
+  if (n < 2 || bad > MAX_BAD_ROW_SHARE * bodyRows) {
+    return fail(problems, `only ${n} of ${bodyRows} lines hold a readable time and light value`, 'Check that this is a light-logger CSV and that the timestamp format and columns are right.');
   }
 
-  // Order, duplicates.
+  // Order, duplicates: an index of readings by time (stable, so the first of equal times stays first).
+  let order = Array.from({ length: n }, (_, i) => i);
   let outOfOrder = false;
-  for (let i = 1; i < raw.length; i++) if ((raw[i]?.utc_ms ?? 0) < (raw[i - 1]?.utc_ms ?? 0)) outOfOrder = true;
+  for (let i = 1; i < n; i++) if (utc.at(i) < utc.at(i - 1)) outOfOrder = true;
   if (outOfOrder) {
-    raw.sort((a, b) => a.utc_ms - b.utc_ms);
+    order.sort((a, b) => utc.at(a) - utc.at(b) || a - b);
     problems.push({ severity: 'warning', line: null, column: header[tsCol] ?? null, message: 'the timestamps are not in order (a clock change in a log without offsets, or merged files)', fix: 'The readings were sorted by time; check the time zone or use timestamps with an offset.' });
   }
-  const unique = raw.filter((s, i) => i === 0 || s.utc_ms !== raw[i - 1]?.utc_ms);
-  if (unique.length < raw.length) problems.push({ severity: 'warning', line: null, column: header[tsCol] ?? null, message: `${raw.length - unique.length} reading(s) repeat an earlier timestamp`, fix: 'Only the first reading at each time is kept.' });
+  const before = order.length;
+  order = order.filter((k, i) => i === 0 || utc.at(k) !== utc.at(order[i - 1] ?? k));
+  if (order.length < before) problems.push({ severity: 'warning', line: null, column: header[tsCol] ?? null, message: `${before - order.length} reading(s) repeat an earlier timestamp`, fix: 'Only the first reading at each time is kept.' });
 
   const diffs: number[] = [];
-  for (let i = 1; i < unique.length; i++) diffs.push((unique[i]?.utc_ms ?? 0) - (unique[i - 1]?.utc_ms ?? 0));
+  for (let i = 1; i < order.length; i++) diffs.push(utc.at(order[i] ?? 0) - utc.at(order[i - 1] ?? 0));
   const interval_ms = median(diffs);
   const maxGap_ms = options.maxGap_min !== undefined ? options.maxGap_min * 60_000 : 3 * interval_ms;
 
   const gaps: LogGap[] = [];
   const samples: LogSample[] = [];
+  const orNull = (v: number) => (Number.isNaN(v) ? null : v);
   let notWorn: { start_ms: number; line: number } | undefined;
-  for (let i = 0; i < unique.length; i++) {
-    const s = unique[i];
-    if (s === undefined) continue;
-    if (!s.worn) {
-      notWorn ??= { start_ms: s.utc_ms, line: s.line };
+  for (let i = 0; i < order.length; i++) {
+    const k = order[i] ?? 0;
+    const t = utc.at(k);
+    const isWorn = worn.at(k) === 1;
+    if (!isWorn) {
+      notWorn ??= { start_ms: t, line: lineOf.at(k) };
     } else {
       if (notWorn !== undefined) {
-        gaps.push({ start_ms: notWorn.start_ms, end_ms: s.utc_ms, duration_min: (s.utc_ms - notWorn.start_ms) / 60_000, reason: 'not-worn', line: notWorn.line });
+        gaps.push({ start_ms: notWorn.start_ms, end_ms: t, duration_min: (t - notWorn.start_ms) / 60_000, reason: 'not-worn', line: notWorn.line });
         notWorn = undefined;
       }
-      samples.push({ utc_ms: s.utc_ms, photopic_lx: s.photopic_lx, melanopicEdi_lx: s.melanopicEdi_lx });
+      samples.push({ utc_ms: t, photopic_lx: orNull(lux.at(k)), melanopicEdi_lx: orNull(mel.at(k)) });
     }
-    const next = unique[i + 1];
-    if (next !== undefined && next.utc_ms - s.utc_ms > maxGap_ms && s.worn) {
-      gaps.push({ start_ms: s.utc_ms + interval_ms, end_ms: next.utc_ms, duration_min: (next.utc_ms - s.utc_ms - interval_ms) / 60_000, reason: 'no-data', line: s.line });
+    const next = order[i + 1];
+    if (next !== undefined && utc.at(next) - t > maxGap_ms && isWorn) {
+      gaps.push({ start_ms: t + interval_ms, end_ms: utc.at(next), duration_min: (utc.at(next) - t - interval_ms) / 60_000, reason: 'no-data', line: lineOf.at(k) });
     }
   }
-  const last = unique[unique.length - 1];
-  if (notWorn !== undefined && last !== undefined) gaps.push({ start_ms: notWorn.start_ms, end_ms: last.utc_ms + interval_ms, duration_min: (last.utc_ms + interval_ms - notWorn.start_ms) / 60_000, reason: 'not-worn', line: notWorn.line });
+  const lastT = utc.at(order[order.length - 1] ?? 0);
+  if (notWorn !== undefined) gaps.push({ start_ms: notWorn.start_ms, end_ms: lastT + interval_ms, duration_min: (lastT + interval_ms - notWorn.start_ms) / 60_000, reason: 'not-worn', line: notWorn.line });
   if (samples.length === 0) return fail(problems, 'the logger was never marked as worn', 'Check the worn column, or leave "wornColumn" out.');
   // Every gap is reported with its start, end and how the run fills it.
   for (const g of gaps) {
@@ -213,10 +313,10 @@ export function importLightLog(text: string, options: LightLogOptions): LightLog
       gaps,
       fill: options.fill,
       timestampColumn: header[tsCol] ?? '',
-      valueColumns: valueCols.map((c) => c.name),
-      timestampFormat: format,
+      valueColumns: c.valueCols.map((col) => col.name),
+      timestampFormat: format ?? 'iso',
       start_ms: first?.utc_ms ?? 0,
-      end_ms: (last?.utc_ms ?? 0) + interval_ms,
+      end_ms: lastT + interval_ms,
     },
   };
 }

@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { detectTimestampFormat, parseTimestamp } from './timestamp.js';
+import fc from 'fast-check';
+import { DateTime } from 'luxon';
+import { detectTimestampFormat, parseTimestamp, timestampReader } from './timestamp.js';
 
 // Expected instants computed by hand from the stated offsets; Europe/Berlin is UTC+1 in winter
 // and UTC+2 in summer (EU Directive 2000/84/EC; summer time 2026 starts 29 March).
@@ -41,5 +43,34 @@ describe('timestamp format detection', () => {
     expect(detectTimestampFormat(['2026-03-31T14:05:00+02:00']).format).toBe('iso');
     expect(detectTimestampFormat(['1774958400']).format).toBe('epoch-s');
     expect(detectTimestampFormat(['1774958400000']).format).toBe('epoch-ms');
+  });
+});
+
+describe('fast timestamp reading agrees with luxon (IANA tz rules) reading by reading', () => {
+  // Zones with summer time, a half-hour zone and Lord Howe's half-hour summer shift.
+  const ZONES = ['Europe/Berlin', 'America/New_York', 'Australia/Sydney', 'Australia/Lord_Howe', 'America/St_Johns', 'Asia/Kolkata', 'UTC'];
+  it('for local ISO times around the year, clock changes included', () => {
+    fc.assert(
+      fc.property(fc.constantFrom(...ZONES), fc.integer({ min: Date.UTC(2024, 0, 1), max: Date.UTC(2027, 0, 1) }), (zone, wall) => {
+        const iso = new Date(wall).toISOString().slice(0, 23);
+        const reference = DateTime.fromISO(iso, { zone });
+        expect(parseTimestamp(iso, 'iso', zone)).toBe(reference.isValid ? reference.toMillis() : undefined);
+        const d = new Date(wall);
+        const dmy = `${d.getUTCDate()}/${d.getUTCMonth() + 1}/${d.getUTCFullYear()} ${d.getUTCHours()}:${String(d.getUTCMinutes()).padStart(2, '0')}:${String(d.getUTCSeconds()).padStart(2, '0')}`;
+        const ref2 = DateTime.fromObject({ year: d.getUTCFullYear(), month: d.getUTCMonth() + 1, day: d.getUTCDate(), hour: d.getUTCHours(), minute: d.getUTCMinutes(), second: d.getUTCSeconds() }, { zone });
+        expect(parseTimestamp(dmy, 'dmy', zone)).toBe(ref2.isValid ? ref2.toMillis() : undefined);
+      }),
+      { numRuns: 3000, seed: 4242 },
+    );
+  });
+  it('in every minute of the days the clocks change', () => {
+    for (const [zone, day] of [['Europe/Berlin', '2026-03-29'], ['Europe/Berlin', '2026-10-25'], ['Australia/Lord_Howe', '2026-04-05'], ['Australia/Lord_Howe', '2026-10-04'], ['America/New_York', '2026-11-01']] as const) {
+      const read = timestampReader('iso', zone);
+      for (let m = 0; m < 1440; m++) {
+        const iso = `${day}T${String(Math.floor(m / 60)).padStart(2, '0')}:${String(m % 60).padStart(2, '0')}:30`;
+        const reference = DateTime.fromISO(iso, { zone });
+        expect(read(iso)).toBe(reference.isValid ? reference.toMillis() : undefined);
+      }
+    }
   });
 });

@@ -4,8 +4,9 @@
  * ("31/03/2026 14:05:00", "03/31/2026 2:05 PM", "2026/03/31 14:05"). A time without an offset is
  * read in the given IANA zone.
  */
-import { DateTime, FixedOffsetZone } from 'luxon';
+import { DateTime } from 'luxon';
 import type { TimestampFormat } from '../schema/light-log-schema.js';
+import { localToUtcReader, validFields, type LocalFields } from './local-time.js';
 
 const DATE_TIME = /^(\d{1,4})[./-](\d{1,2})[./-](\d{1,4})(?:[ T]+(\d{1,2}):(\d{2})(?::(\d{2})(?:[.,](\d{1,6}))?)?\s*([AaPp][Mm])?)?\s*(Z|[+-]\d{2}:?\d{2}|UTC|GMT)?$/;
 
@@ -33,46 +34,76 @@ function splitDateTime(text: string): Parts | undefined {
   return { a: Number(m[1]), b: Number(m[2]), c: Number(m[3]), h, mi: Number(m[5] ?? 0), s: Number(m[6] ?? 0), ms: frac === '' ? 0 : Math.round(Number(`0.${frac}`) * 1000), offset: m[9] };
 }
 
-function zoneFor(offset: string | undefined, zone: string): string | FixedOffsetZone {
-  if (offset === undefined) return zone;
-  if (offset === 'Z' || offset === 'UTC' || offset === 'GMT') return FixedOffsetZone.utcInstance;
+const MIN_YEAR = 1970;
+const MAX_YEAR = 2200;
+
+/** ISO 8601 calendar date-times in extended form (the form loggers write); other ISO forms go to luxon. */
+const ISO_FAST = /^(\d{4})-(\d{2})-(\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2})(?:[.,](\d{1,9}))?)?)?(Z|[+-]\d{2}(?::?\d{2})?)?$/;
+
+function offsetMinutes(offset: string): number {
+  if (offset === 'Z' || offset === 'UTC' || offset === 'GMT') return 0;
   const sign = offset.startsWith('-') ? -1 : 1;
   const digits = offset.slice(1).replace(':', '');
-  return FixedOffsetZone.instance(sign * (Number(digits.slice(0, 2)) * 60 + Number(digits.slice(2, 4))));
+  return sign * (Number(digits.slice(0, 2)) * 60 + Number(digits.slice(2, 4) || '0'));
 }
 
-function build(year: number, month: number, day: number, p: Parts, zone: string): number | undefined {
-  if (year < 1970 || year > 2200) return undefined;
-  const dt = DateTime.fromObject({ year, month, day, hour: p.h, minute: p.mi, second: p.s, millisecond: p.ms }, { zone: zoneFor(p.offset, zone) });
-  return dt.isValid ? dt.toMillis() : undefined;
+/**
+ * A reader of timestamps in one format and zone: text → UTC ms, undefined when it cannot be read.
+ * Local times go through localToUtcReader (one zone lookup per local hour), so long logs read fast.
+ */
+export function timestampReader(format: Exclude<TimestampFormat, 'auto'>, zone: string): (text: string) => number | undefined {
+  const local = localToUtcReader(zone);
+  const withOffset = (f: LocalFields, offset: string | undefined): number | undefined => {
+    if (f.year < MIN_YEAR || f.year > MAX_YEAR) return undefined;
+    if (offset === undefined) return local(f);
+    if (!validFields(f)) return undefined;
+    const minutes = offsetMinutes(offset);
+    if (Math.abs(minutes) > 18 * 60) return undefined;
+    return Date.UTC(f.year, f.month - 1, f.day, f.hour, f.minute, f.second, f.millisecond) - minutes * 60_000;
+  };
+  const isoViaLuxon = (t: string): number | undefined => {
+    const hasOffset = /(Z|[+-]\d{2}(:?\d{2})?)$/.test(t) && /T|\d \d/.test(t);
+    const dt = hasOffset ? DateTime.fromISO(t.replace(' ', 'T'), { setZone: true }) : DateTime.fromISO(t.replace(' ', 'T'), { zone });
+    return dt.isValid ? dt.toMillis() : undefined;
+  };
+  return (text: string) => {
+    const t = text.trim();
+    if (t === '') return undefined;
+    switch (format) {
+      case 'epoch-s':
+      case 'epoch-ms': {
+        if (!/^\d+(\.\d+)?$/.test(t)) return undefined;
+        const v = Number(t) * (format === 'epoch-s' ? 1000 : 1);
+        return Number.isFinite(v) && v <= 8.64e15 ? Math.round(v) : undefined;
+      }
+      case 'iso': {
+        const m = ISO_FAST.exec(t);
+        if (m === null) return isoViaLuxon(t);
+        const frac = m[7] ?? '';
+        // Fractions of a second: milliseconds truncated, as luxon reads them.
+        const f: LocalFields = { year: Number(m[1]), month: Number(m[2]), day: Number(m[3]), hour: Number(m[4] ?? 0), minute: Number(m[5] ?? 0), second: Number(m[6] ?? 0), millisecond: frac === '' ? 0 : Math.floor(Number(`0.${frac}`) * 1000) };
+        if (!validFields(f)) return undefined;
+        if (m[8] === undefined || m[4] === undefined) return m[8] === undefined ? local(f) : isoViaLuxon(t);
+        const minutes = offsetMinutes(m[8]);
+        return Math.abs(minutes) > 18 * 60 ? undefined : Date.UTC(f.year, f.month - 1, f.day, f.hour, f.minute, f.second, f.millisecond) - minutes * 60_000;
+      }
+      case 'ymd':
+      case 'dmy':
+      case 'mdy': {
+        const p = splitDateTime(t);
+        if (p === undefined) return undefined;
+        const time = { hour: p.h, minute: p.mi, second: p.s, millisecond: p.ms };
+        if (format === 'ymd') return withOffset({ year: p.a, month: p.b, day: p.c, ...time }, p.offset);
+        const year = p.c < 100 ? 2000 + p.c : p.c;
+        return format === 'dmy' ? withOffset({ year, month: p.b, day: p.a, ...time }, p.offset) : withOffset({ year, month: p.a, day: p.b, ...time }, p.offset);
+      }
+    }
+  };
 }
 
 /** UTC ms of a timestamp in the given format; undefined when it cannot be read. */
 export function parseTimestamp(text: string, format: Exclude<TimestampFormat, 'auto'>, zone: string): number | undefined {
-  const t = text.trim();
-  if (t === '') return undefined;
-  switch (format) {
-    case 'epoch-s':
-    case 'epoch-ms': {
-      if (!/^\d+(\.\d+)?$/.test(t)) return undefined;
-      const v = Number(t) * (format === 'epoch-s' ? 1000 : 1);
-      return Number.isFinite(v) ? Math.round(v) : undefined;
-    }
-    case 'iso': {
-      const hasOffset = /(Z|[+-]\d{2}(:?\d{2})?)$/.test(t) && /T|\d \d/.test(t);
-      const dt = hasOffset ? DateTime.fromISO(t.replace(' ', 'T'), { setZone: true }) : DateTime.fromISO(t.replace(' ', 'T'), { zone });
-      return dt.isValid ? dt.toMillis() : undefined;
-    }
-    case 'ymd':
-    case 'dmy':
-    case 'mdy': {
-      const p = splitDateTime(t);
-      if (p === undefined) return undefined;
-      if (format === 'ymd') return build(p.a, p.b, p.c, p, zone);
-      const year = p.c < 100 ? 2000 + p.c : p.c;
-      return format === 'dmy' ? build(year, p.b, p.a, p, zone) : build(year, p.a, p.b, p, zone);
-    }
-  }
+  return timestampReader(format, zone)(text);
 }
 
 export interface DetectedFormat {
