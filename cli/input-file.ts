@@ -13,7 +13,7 @@ export type InputKind = 'scenario' | 'light-log' | 'weather' | 'spectrum' | 'sle
 /** Largest file of each kind, bytes. Documented in docs/scenario-format.md ("Limits"). */
 export const MAX_INPUT_BYTES: Readonly<Record<InputKind, number>> = {
   scenario: 20_000_000,
-  'light-log': 50_000_000,
+  'light-log': 20_000_000,
   weather: 10_000_000,
   spectrum: 5_000_000,
   sleep: 5_000_000,

@@ -13,6 +13,7 @@ import { readInputFile } from '../input-file.js';
 import { formatProblem, validateScenarioText, type Scenario } from '../../schedules/index.js';
 import type { RunInput } from '../../schedules/run/index.js';
 import { paperOption } from '../run-output/paper-option.js';
+import { cohortWorkerCount, MAX_COHORT_SIZE, MAX_COHORT_WORKERS } from '../run-output/cohort-limits.js';
 import { runAndWrite } from '../run-output/run-and-write.js';
 
 /** Weather and light-log texts the scenario refers to, read relative to the scenario file. */
@@ -60,9 +61,9 @@ function wholeNumber(ctx: CommandContext, name: string, min: number, max: number
 
 /** --cohort n --seed s [--workers w] [--until-stable]; the seed is required so that a cohort can be repeated. */
 function cohortOptions(ctx: CommandContext): { size: number; seed: number; workers?: number; untilStable?: boolean } | undefined {
-  const size = wholeNumber(ctx, 'cohort', 1, 100_000);
+  const size = wholeNumber(ctx, 'cohort', 1, MAX_COHORT_SIZE);
   const seed = wholeNumber(ctx, 'seed', 0, Number.MAX_SAFE_INTEGER);
-  const workers = wholeNumber(ctx, 'workers', 1, 256);
+  const workers = wholeNumber(ctx, 'workers', 1, MAX_COHORT_WORKERS);
   if (size === undefined) {
     if (seed !== undefined || workers !== undefined || ctx.values['until-stable'] === true) throw new UsageError('--seed, --workers and --until-stable go with --cohort <n>');
     return undefined;
@@ -95,6 +96,7 @@ export const runCommand: Command = {
     const text = readInputFile(file, 'scenario');
     const scenario = validatedScenario(text, file);
     const inputs = externalInputs(scenario, file);
+    if (cohort !== undefined) cohort.workers = cohortWorkerCount(scenario, cohort.workers, Object.fromEntries(Object.entries(inputs.lightLogTexts ?? {}).map(([id, t]) => [id, t.length])));
     const chromium = stringOption(ctx, 'chromium');
     await runAndWrite(ctx, {
       input: { scenario, ...inputs },

@@ -19,6 +19,7 @@ import { referenceChecks, type SetAsideIds } from './sense/reference-checks.js';
 import { siteChecks } from './sense/site-checks.js';
 import { personChecks } from './sense/person-checks.js';
 import { timingChecks } from './sense/timing-checks.js';
+import { limitChecks } from './sense/limit-checks.js';
 
 export interface ScenarioValidation {
   /** True when there is no error (warnings allowed). */
@@ -61,7 +62,7 @@ function allFieldNames(): readonly string[] {
 }
 
 function senseChecks(scenario: Scenario, setAside?: SetAsideIds): ScenarioProblem[] {
-  return [...siteChecks(scenario), ...referenceChecks(scenario, setAside), ...personChecks(scenario), ...timingChecks(scenario)];
+  return [...limitChecks(scenario), ...siteChecks(scenario), ...referenceChecks(scenario, setAside), ...personChecks(scenario), ...timingChecks(scenario)];
 }
 
 interface KeptItems<T> {
