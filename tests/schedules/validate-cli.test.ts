@@ -56,9 +56,12 @@ describe('zeitlight validate', () => {
       run: Record<string, unknown>;
       personas: Record<string, unknown>[];
       lightLogs: unknown[];
+      strategies: unknown[];
       format?: unknown;
     };
     delete bad.format;
+    bad.personas = bad.personas.filter((p) => p.id === 'nurse' || p.id === 'desk-worker');
+    bad.strategies = [];
     bad.run.days = 0;
     const desk = bad.personas[1] as { age_y: unknown; week: Record<string, unknown>; measuredLight?: unknown[] };
     desk.age_y = 'forty';
