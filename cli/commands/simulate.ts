@@ -14,9 +14,9 @@ import { numberOption, positionals, requiredNumberOption, stringOption } from '.
 import { readInputFile } from '../input-file.js';
 import { formatTable, HEALTH_CAUTION, printJson } from '../output.js';
 import { MELATONIN_OUTPUT_DEFINITIONS, runBodyClock, type InitialCondition } from '../../model/circadian/body-clock.js';
-import { BodyClockInputError, parseSleepCsv } from '../../model/circadian/light-csv.js';
 import { lightFromSteps } from '../../model/circadian/light-series.js';
 import { LightSeriesCsvError, readLightSeriesCsv } from '../../schedules/lightlog/light-series-csv.js';
+import { readSleepCsv, SleepCsvError } from '../../schedules/lightlog/sleep-csv.js';
 import { isValidTimeZone } from '../../schedules/time/local-calendar.js';
 import { createPacemaker, DEFAULT_PACEMAKER_ID, isPacemakerId, PACEMAKER_IDS } from '../../model/circadian/registry.js';
 import type { SleepSpec } from '../../model/circadian/sleep-input.js';
@@ -78,9 +78,9 @@ export const simulateCommand: Command = {
       sleep =
         sleepPath === undefined
           ? { mode: 'free', ...(alarm === undefined ? {} : { alarm_h: alarm }) }
-          : { mode: 'prescribed', episodes: parseSleepCsv(readInputFile(sleepPath, 'sleep', '--sleep'), sleepPath) };
+          : { mode: 'prescribed', episodes: readSleepCsv(readInputFile(sleepPath, 'sleep', '--sleep'), sleepPath) };
     } catch (err) {
-      if (err instanceof BodyClockInputError || err instanceof LightSeriesCsvError) throw new CliError(err.message);
+      if (err instanceof SleepCsvError || err instanceof LightSeriesCsvError) throw new CliError(err.message);
       throw err;
     }
 
