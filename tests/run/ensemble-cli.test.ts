@@ -20,7 +20,8 @@ function ctx(positionals: string[], values: Record<string, string | boolean>) {
 function scenarioFile(): string {
   const dir = mkdtempSync(join(tmpdir(), 'zeitlight-ensemble-'));
   const file = join(dir, 'scenario.json');
-  const desk = { ...DEMO_SCENARIO, run: { startDate: '2026-03-23', days: 3 }, personas: DEMO_SCENARIO.personas.filter((p) => p.id === 'desk-worker'), strategies: (DEMO_SCENARIO.strategies ?? []).filter((s) => s.id === 'office-dim-evening') };
+  const strategies = (DEMO_SCENARIO.strategies ?? []).filter((s) => s.id === 'office-dim-evening');
+  const desk = { ...DEMO_SCENARIO, run: { startDate: '2026-03-23', days: 3 }, personas: DEMO_SCENARIO.personas.filter((p) => strategies.some((s) => s.personas?.includes(p.id))), strategies };
   writeFileSync(file, JSON.stringify(desk));
   return file;
 }

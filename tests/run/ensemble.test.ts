@@ -1,19 +1,24 @@
 /**
  * The model ensemble on the built-in demo: every headline figure's range across the default
- * ensemble in results.json and summary.csv, the default model's own figures kept, and rank
- * changes across models said in words. The pinned range is a regression value of our own
- * (recorded from this run, see tests/run/README.md), not an outside reference.
+ * ensemble in results.json and summary.csv, the default model's own figures kept; and on the
+ * frozen office scenario (ensemble-fixture.ts): rank changes across models said in words and a
+ * pinned range — regression values of our own (recorded from that run), not an outside reference.
  */
 import Papa from 'papaparse';
 import { describe, expect, test } from 'vitest';
 import { DEFAULT_ENSEMBLE_PACEMAKERS } from '../../model/circadian/registry.js';
 import { HEADLINE_SLEEPINESS_ID, SLEEPINESS_MODEL_IDS } from '../../model/circadian/sleepiness-registry.js';
 import type { OccupantResult } from '../../schedules/run/cohort-occupant.js';
-import { assembleEnsemble, ENSEMBLE_METRICS, planEnsemble, runEnsembleJob, summaryCsv, withEnsemble, type EnsembleJobResult, type RunResults } from '../../schedules/run/index.js';
+import { assembleEnsemble, ENSEMBLE_METRICS, planEnsemble, runEnsembleJob, runScenario, summaryCsv, withEnsemble, type EnsembleJobResult, type RunOutput, type RunResults } from '../../schedules/run/index.js';
 import { demoRun } from './demo-run.js';
+import { ensembleFixture } from './ensemble-fixture.js';
 
 let cached: RunResults | undefined;
 const ensembleResults = (): RunResults => (cached ??= withEnsemble(demoRun()));
+let office: RunOutput | undefined;
+const officeRun = (): RunOutput => (office ??= runScenario({ scenario: ensembleFixture() }));
+let officeCached: RunResults | undefined;
+const officeEnsemble = (): RunResults => (officeCached ??= withEnsemble(officeRun()));
 
 const HEADLINE_KEY = { phase_shift_h: 'mean_phase_shift_h', melatonin_suppression_pct: 'mean_melatonin_suppression_pct', work_hours_kss_ge_7_share: 'work_hours_kss_ge_7_share' } as const;
 
@@ -71,11 +76,11 @@ describe('model ensemble on the demo', () => {
     }
   }, 60_000);
 
-  // Regression values of our own (recorded from this run; tolerance 0.002 h ≈ 7 s, well below the
-  // golden run's 0.02 h, so a change of any member is noticed): the desk worker's tunable-white
-  // phase shift (h, + later) per body-clock model.
+  // Regression values of our own (recorded from the frozen office scenario, 2026-12-05; tolerance
+  // 0.002 h ≈ 7 s, well below the golden run's 0.02 h, so a change of any member is noticed): the
+  // desk worker's tunable-white phase shift (h, + later) per body-clock model.
   test('pins the desk worker’s tunable-white phase-shift range across the models', () => {
-    const s = ensembleResults().personas.find((p) => p.id === 'desk-worker')?.strategies.find((x) => x.id === 'office-tunable-white');
+    const s = officeEnsemble().personas.find((p) => p.id === 'desk-worker')?.strategies.find((x) => x.id === 'office-tunable-white');
     const e = s?.ensemble?.mean_phase_shift_h;
     const recorded: [string, number][] = [
       ['jfk99-x7-sh07', -0.0272],
@@ -98,8 +103,9 @@ describe('model ensemble on the demo', () => {
       expect(at).toBeGreaterThan(0);
       expect(fields.slice(at + 1, at + 4)).toEqual([`${metric}_ensemble_min`, `${metric}_ensemble_max`, `${metric}_ensemble_models`]);
     }
-    const row = parsed.data.find((x) => x['persona_id'] === 'desk-worker' && x['strategy_id'] === 'office-dim-evening');
-    const s = r.personas.find((p) => p.id === 'desk-worker')?.strategies.find((x) => x.id === 'office-dim-evening');
+    const persona = r.personas[0];
+    const s = persona?.strategies.find((x) => !x.is_baseline);
+    const row = parsed.data.find((x) => x['persona_id'] === persona?.id && x['strategy_id'] === s?.id);
     expect(Number(row?.['mean_melatonin_suppression_pct_ensemble_min'])).toBe(s?.ensemble?.mean_melatonin_suppression_pct.min);
     expect(Number(row?.['mean_melatonin_suppression_pct_ensemble_max'])).toBe(s?.ensemble?.mean_melatonin_suppression_pct.max);
     expect(Number(row?.['mean_phase_shift_h_ensemble_models'])).toBe(r.ensemble?.models.filter((m) => m.role === 'body clock').length);
@@ -115,8 +121,7 @@ describe('model ensemble on the demo', () => {
   }, 60_000);
 
   test('a strategy whose rank changes with the model is said in words', () => {
-    const out = demoRun();
-    const plan = planEnsemble(out);
+    const plan = planEnsemble(officeRun());
     const done = plan.jobs.map((j) => runEnsembleJob(plan, j));
     // Under the Hannay et al. 2019 model (with either KSS model), let the lunch walk suppress
     // melatonin 10 points less than that model says: it then ranks alone first with that model,
@@ -133,9 +138,9 @@ describe('model ensemble on the demo', () => {
       );
       return { ...d, results };
     });
-    const untouched = ensembleResults().personas.find((p) => p.id === 'desk-worker')?.ensemble_ranking;
+    const untouched = officeEnsemble().personas.find((p) => p.id === 'desk-worker')?.ensemble_ranking;
     const ranksOf = (ranking: typeof untouched, id: string) => ranking?.strategies.find((s) => s.strategy_id === id)?.ranks.map((x) => [x.pacemaker, x.rank]);
-    // the recorded demo: the baseline, tunable white, lunch walk and daylight first share first place under every pair
+    // as recorded: the baseline, tunable white, lunch walk and daylight first share first place under every pair
     expect(ranksOf(untouched, 'baseline')?.every(([, rank]) => rank === 1)).toBe(true);
     expect(untouched?.strategies.every((s) => s.sentence === null)).toBe(true);
 

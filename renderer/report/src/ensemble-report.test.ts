@@ -4,15 +4,20 @@ import { describe, expect, it } from 'vitest';
 import { DEMO_SCENARIO } from '../../../schedules/demo/demo-scenario.js';
 import { runScenario, withEnsemble, type RunResults } from '../../../schedules/run/index.js';
 import { validateScenarioValue } from '../../../schedules/validation/validate-scenario.js';
-import { EnsembleMethods } from './components/EnsembleMethods.js';
-import { Methods } from './components/sections.js';
+import { Methods, RangesSection } from './components/sections.js';
+import { BRIEFING_DOCUMENT_KIND } from './briefing-document.js';
+import { reportModels } from './report-models.js';
+import { pacemakerCitation, sleepinessCitation } from '../../../model/circadian/model-citations.js';
+import type { PacemakerId } from '../../../model/circadian/registry.js';
+import type { SleepinessModelId } from '../../../model/circadian/sleepiness-registry.js';
 import { reportViewWithEnsemble } from './ensemble-report.js';
 import { viewFromResults } from './results-view.js';
 
-/** The demo's desk worker alone for 3 days with the dimmer-evening strategy, run with the model ensemble. */
+/** The demo's dimmer-evening strategy for 3 days with the people it is for, run with the model ensemble. */
 function ensembleResults(): RunResults {
   const s = structuredClone(DEMO_SCENARIO);
-  const desk = { ...s, run: { ...s.run, days: 3 }, personas: s.personas.filter((p) => p.id === 'desk-worker'), strategies: (s.strategies ?? []).filter((x) => x.id === 'office-dim-evening') };
+  const strategies = (s.strategies ?? []).filter((x) => x.id === 'office-dim-evening');
+  const desk = { ...s, run: { ...s.run, days: 3 }, personas: s.personas.filter((p) => strategies.some((x) => x.personas?.includes(p.id))), strategies };
   const v = validateScenarioValue(desk);
   if (v.scenario === undefined) throw new Error('scenario does not validate');
   return withEnsemble(runScenario({ scenario: v.scenario }));
@@ -35,15 +40,23 @@ describe('model ensemble in the briefing', () => {
     expect(range('daytime-250')).toBeUndefined();
   });
 
-  it('lists every ensemble model once on the methods page with its citation, the defaults marked', () => {
-    const html = renderToStaticMarkup(createElement(EnsembleMethods, { ensemble: view.ensemble }));
+  it('lists every ensemble model once on the methods page with its one citation from the model registry, the defaults marked as giving the figures', () => {
+    const models = reportModels(results);
+    const html = renderToStaticMarkup(createElement(Methods, { models })).replace(/&amp;/g, '&');
     for (const m of results.ensemble?.models ?? []) {
-      expect(html).toContain(m.name.replace(/&/g, '&amp;'));
-      expect(html).toContain(m.source.replace(/&/g, '&amp;'));
+      const citation = m.role === 'body clock' ? pacemakerCitation(m.id as PacemakerId) : sleepinessCitation(m.id as SleepinessModelId);
+      expect(html.split(citation).length - 1, m.id).toBe(1);
+      expect(html).not.toContain(m.id);
     }
-    expect(html.match(/\(default\)/g)?.length).toBe(2);
-    const methods = renderToStaticMarkup(createElement(Methods, { records: [], runModels: null, ensemble: view.ensemble }));
-    expect(methods).toContain('Model ensemble');
-    expect(renderToStaticMarkup(createElement(EnsembleMethods, { ensemble: undefined }))).toBe('');
+    expect(models.filter((m) => m.use === 'figures').map((m) => m.part)).toEqual(['Body clock and its response to light', 'Melatonin and its suppression by light', 'Sleepiness (KSS)']);
+  });
+
+  it('gives each strategy’s headline figures with their range across the models on the ranges page', () => {
+    const doc = { kind: BRIEFING_DOCUMENT_KIND, paper: 'A4', generatedOn: '2026-12-01', zeitlightVersion: 'test', scenario: {}, results } as const;
+    const html = renderToStaticMarkup(createElement(RangesSection, { doc, view, results }));
+    const s = results.personas[0]?.strategies.find((x) => x.id === 'office-dim-evening');
+    const shift = s?.ensemble?.mean_phase_shift_h;
+    expect(html).toContain('Across published models');
+    expect(html).toContain(`${(shift?.min ?? NaN).toFixed(2).replace('-', '−')} to ${(shift?.max ?? NaN).toFixed(2).replace('-', '−')} across 3`);
   });
 });

@@ -3,10 +3,11 @@ import { DEMO_SCENARIO } from '../../../schedules/demo/demo-scenario.js';
 import { handleRunRequest } from './run-in-worker.js';
 import type { WorkerToPage } from './simulation-protocol.js';
 
-/** The demo's desk worker alone, 3 days: a quick scenario with a baseline and four strategies. */
+/** The demo's office part for 3 days (its strategies and the people they are for): a quick scenario. */
 function smallScenario(): unknown {
   const s = structuredClone(DEMO_SCENARIO);
-  return { ...s, run: { ...s.run, days: 3 }, personas: s.personas.filter((p) => p.id === 'desk-worker'), strategies: (s.strategies ?? []).filter((x) => x.id.startsWith('office-')) };
+  const strategies = (s.strategies ?? []).filter((x) => x.id.startsWith('office-'));
+  return { ...s, run: { ...s.run, days: 3 }, personas: s.personas.filter((p) => strategies.some((x) => x.personas?.includes(p.id))), strategies };
 }
 
 describe('model ensemble in the simulation worker', () => {
