@@ -2,9 +2,11 @@
  * Body-clock simulation driver.
  *
  * Pass 1 — pacemaker + its Process L (and, for free sleep, the HCL homeostat). By default the
- * time axis is split only where sleep state changes (prescribed sleep/wake, alarms, wake windows,
- * predicted sleep switches) and each stretch is integrated through every change of light
- * (through-light.ts: Process L in closed form, the oscillator by the drive-moment stepper). With
+ * time axis is split where sleep state changes (prescribed sleep/wake, alarms, wake windows,
+ * predicted sleep switches); a stretch whose light changes often (more than 10 times an hour on
+ * average: measured logs, daylight) is integrated through every change of light (through-light.ts:
+ * Process L in closed form, the oscillator by the drive-moment stepper), a stretch of few changes
+ * is split at each and integrated by odex piece by piece, which is then cheaper. With
  * an explicit integrator (odex at other tolerances, RK4) or `method: 'restart-at-light-changes'`
  * the axis is also split at every light breakpoint, so the right-hand side is smooth in each
  * piece (the reference method). Phase events are located on the dense output by bisection: the
@@ -49,6 +51,24 @@ const BREAK_TOL_H = 1e-12;
  * consecutive cycles' minima are about 24 h apart (at most a few hours less after a shift).
  */
 const MARKER_CYCLE_H = 8;
+/**
+ * Light changes per hour above which a stretch is integrated through light rather than restarted
+ * at every change. Measured on the 2-core machine (docs/performance/circadian.md): a restart of
+ * the reference solver costs about 6 µs, a day through light about 1.5–2 ms, so restarts cost more
+ * from roughly 12 changes an hour (per-minute logs and daylight: 40–60; a routine with a few
+ * lighting changes a day: under 3).
+ */
+const THROUGH_LIGHT_MIN_CHANGES_PER_H = 10;
+
+/** Average number of light breakpoints per hour in [t0, t1) (a periodic series repeats its day). */
+function lightChangesPerHour(series: LightSeries, t0: number, t1: number, periodic: boolean): number {
+  const span = t1 - t0;
+  if (!(span > 0)) return 0;
+  if (periodic) return series.start_h.length / 24;
+  const a = segmentIndexAt(series, t0);
+  const b = segmentIndexAt(series, t1);
+  return (b - a) / span;
+}
 
 export interface SimulationOptions {
   readonly model: Pacemaker;
@@ -352,9 +372,12 @@ export function simulate(opts: SimulationOptions): SimulationRun {
     const wake = awake ? 1 : 0;
     const held = free && awake && heldAwakeAt(t);
     const nextEp = free ? undefined : nextPrescribedTransition(episodes, t);
-    let tStop = Math.min(tEnd, throughLight ? Infinity : nextLightBreak(lit, t), nextEp?.t_h ?? Infinity);
+    let tStop = Math.min(tEnd, nextEp?.t_h ?? Infinity);
     if (free && !awake) tStop = Math.min(tStop, nextAlarm(t));
     if (free) tStop = Math.min(tStop, nextWindowEdge(t));
+    // Through light only where light changes often enough to make restarts the larger cost.
+    const throughThisPiece = throughLight && lightChangesPerHour(lit, t, tStop, periodic) > THROUGH_LIGHT_MIN_CHANGES_PER_H;
+    if (!throughThisPiece) tStop = Math.min(tStop, nextLightBreak(lit, t));
 
     const rhs = (tq: number, yq: readonly number[]): number[] => {
       const I = gate * (smooth === undefined ? level : Math.max(0, smooth(tq - d0)));
@@ -436,7 +459,7 @@ export function simulate(opts: SimulationOptions): SimulationRun {
           const fromPiece = tOld - tPiece <= MARKER_REFINE_MAX_SPAN_H;
           let tm: number;
           let depth: number;
-          if (throughLight) {
+          if (throughThisPiece) {
             const refined = minimumThroughLight(piece, tOld, yA, tNew, 0);
             tm = refined?.t ?? 0.5 * (lo + hi);
             depth = refined?.value ?? dense(0, tm);
@@ -477,7 +500,7 @@ export function simulate(opts: SimulationOptions): SimulationRun {
 
     const dense = free ? undefined : [0, 1];
     let res;
-    if (throughLight) {
+    if (throughThisPiece) {
       const through = integrateThroughLight(piece, t, y, tStop, observer, throughLightStep);
       throughLightStep = through.nextStep;
       res = through;
