@@ -62,16 +62,29 @@ function splitSystem(piece: ThroughLightPiece): DrivenSystem {
   const d0 = new Array<number>(model.stateSize).fill(0);
   const d1 = new Array<number>(model.stateSize).fill(0);
   const noLight = new Array<number>(model.stateSize).fill(0);
+  // The dark rates at the last state `free` saw: the stepper asks for F and g at the same state
+  // after every accepted step, and F does not depend on n, so g can reuse them there.
+  const lastFreeAt = new Array<number>(model.stateSize).fill(Number.NaN);
+  const sameAsLastFree = (y: ArrayLike<number>): boolean => {
+    for (let i = 0; i < model.stateSize; i++) if (i !== nIndex && lastFreeAt[i] !== y[i]) return false;
+    return true;
+  };
   return {
     size,
     free(y, out) {
       model.derivatives(y, 0, d0);
-      for (let i = 0; i < model.stateSize; i++) out[i] = i === nIndex ? 0 : (d0[i] as number);
+      for (let i = 0; i < model.stateSize; i++) {
+        out[i] = i === nIndex ? 0 : (d0[i] as number);
+        lastFreeAt[i] = y[i] as number;
+      }
       if (homeostatRate !== null) out[model.stateSize] = homeostatRate(y);
     },
     coupling(y, out) {
       for (let i = 0; i < model.stateSize; i++) noLight[i] = i === nIndex ? 0 : (y[i] as number);
-      model.derivatives(noLight, 0, d0);
+      if (!sameAsLastFree(y)) {
+        model.derivatives(noLight, 0, d0);
+        for (let i = 0; i < model.stateSize; i++) lastFreeAt[i] = y[i] as number;
+      }
       const drive = model.derivatives(noLight, REFERENCE_LIGHT_LX, d1);
       for (let i = 0; i < model.stateSize; i++) out[i] = i === nIndex || !(drive > 0) ? 0 : ((d1[i] as number) - (d0[i] as number)) / drive;
       if (homeostatRate !== null) out[model.stateSize] = 0;
