@@ -1,5 +1,6 @@
 // The workspace: build the scenario on the left (Site, Places, People, Strategies), read the
-// results (Light at the eye, Body clock, Melatonin, Sleepiness, Sleep, Compare, Cohort).
+// results (Summary, Light at the eye, Body clock, Melatonin, Sleepiness, Sleep, Compare, Cohort).
+// A scenario opens on its Summary (the answer first); a new empty one on the People editor.
 import { useEffect, useState } from 'react';
 import { useController, useWorkspace } from './state/workspace-context.js';
 import { isDirty } from './state/workspace-store.js';
@@ -17,8 +18,10 @@ import { SleepView } from './views/SleepView.js';
 import { CompareView } from './views/CompareView.js';
 import { ProblemsList } from './components/ProblemsList.js';
 import { CohortView } from './views/CohortView.js';
+import { SummaryView } from './views/SummaryView.js';
+import { RunStatusLine } from './views/RunStatusLine.js';
 
-type ViewId = 'site' | 'places' | 'people' | 'strategies' | 'light' | 'clock' | 'melatonin' | 'sleepiness' | 'sleep' | 'compare' | 'cohort';
+type ViewId = 'site' | 'places' | 'people' | 'strategies' | 'summary' | 'light' | 'clock' | 'melatonin' | 'sleepiness' | 'sleep' | 'compare' | 'cohort';
 
 const BUILD: readonly { id: ViewId; label: string }[] = [
   { id: 'site', label: 'Site' },
@@ -27,6 +30,7 @@ const BUILD: readonly { id: ViewId; label: string }[] = [
   { id: 'strategies', label: 'Strategies' },
 ];
 const RESULTS: readonly { id: ViewId; label: string; lead: string; day: boolean }[] = [
+  { id: 'summary', label: 'Summary', lead: 'The answer first: what to do for each person and why, in plain words, with the headline figures of every strategy.', day: false },
   { id: 'light', label: 'Light at the eye', lead: 'Melanopic EDI at the eye through one day, by source.', day: true },
   { id: 'clock', label: 'Body clock', lead: 'Circadian phase (DLMO, CBTmin) day by day for each strategy.', day: false },
   { id: 'melatonin', label: 'Melatonin', lead: 'Modelled melatonin through one night, with and without light.', day: true },
@@ -37,6 +41,16 @@ const RESULTS: readonly { id: ViewId; label: string; lead: string; day: boolean 
 
 function StartScreen() {
   const controller = useController();
+  const notice = useWorkspace().notice;
+  // An error from opening a file stays on the start page until the next attempt (the notice itself fades).
+  const [error, setError] = useState<string | null>(null);
+  useEffect(() => {
+    if (notice?.tone === 'error') setError(notice.text);
+  }, [notice]);
+  const open = () => {
+    setError(null);
+    void controller.open();
+  };
   return (
     <section className="start">
       <h1>Zeitlight</h1>
@@ -48,10 +62,15 @@ function StartScreen() {
         <button type="button" className="button" onClick={() => controller.newDocument()}>
           New scenario
         </button>
-        <button type="button" className="button" onClick={() => void controller.open()}>
+        <button type="button" className="button" onClick={open}>
           Open a scenario file…
         </button>
       </div>
+      {error !== null && (
+        <div className="banner banner-warning start-error" role="alert">
+          <strong>The file could not be opened.</strong> {error}
+        </div>
+      )}
     </section>
   );
 }
@@ -59,7 +78,7 @@ function StartScreen() {
 export function App() {
   const controller = useController();
   const state = useWorkspace();
-  const [view, setView] = useState<ViewId>('people');
+  const [view, setView] = useState<ViewId>('summary');
   const [selection, setSelection] = useState<ResultsSelection>({ personaId: '', day: 0 });
   const scenario = state.history.present;
   const dirty = isDirty(state);
@@ -69,6 +88,10 @@ export function App() {
     window.addEventListener('keydown', onKey);
     return () => window.removeEventListener('keydown', onKey);
   }, [controller]);
+  // A loaded document opens on its answer; a new empty one on the People editor.
+  useEffect(() => {
+    if (state.landing.seq > 0) setView(state.landing.on === 'editor' ? 'people' : 'summary');
+  }, [state.landing]);
   useEffect(() => {
     document.title = `${dirty ? '• ' : ''}${state.displayName} — Zeitlight`;
   }, [dirty, state.displayName]);
@@ -150,9 +173,7 @@ export function App() {
             Cohort
           </button>
           <div className="nav-footer">
-            <span className={`run-state run-${results.status}`}>
-              {results.status === 'ready' ? 'Results up to date' : results.status === 'running' ? 'Simulating…' : results.status === 'failed' ? 'Needs fixes' : results.status === 'unavailable' ? 'Engine not connected' : 'Idle'}
-            </span>
+            <RunStatusLine results={results} problems={state.problems} />
           </div>
         </nav>
         <main className="content">
@@ -163,9 +184,10 @@ export function App() {
           {view === 'strategies' && <StrategiesPanel scenario={scenario} />}
           {view === 'cohort' && <CohortView scenario={scenario} />}
           {resultsEntry !== undefined && (
-            <ResultsFrame title={resultsEntry.label} lead={resultsEntry.lead} results={results} selection={selection} onSelect={setSelection} showDay={resultsEntry.day}>
+            <ResultsFrame title={resultsEntry.label} lead={resultsEntry.lead} results={results} selection={selection} onSelect={setSelection} showDay={resultsEntry.day} showPerson={view !== 'summary'}>
               {(v, personaId) => {
                 const day = Math.min(selection.day, v.days - 1);
+                if (view === 'summary') return <SummaryView view={v} onOpen={setView} />;
                 if (view === 'light') return <LightAtEyeView view={v} personaId={personaId} day={day} />;
                 if (view === 'clock') return <BodyClockView view={v} personaId={personaId} />;
                 if (view === 'melatonin') return <MelatoninView view={v} personaId={personaId} day={day} />;

@@ -5,7 +5,7 @@ export { RunInputError } from './run-input-error.js';
 export { LIGHT_SOURCES, type LightSource, type EyeSeries } from './eye-series.js';
 export { exposureCsv, summaryCsv, EXPOSURE_STEP_MIN } from './results-csv.js';
 export { RECOMMENDATION_RULE } from './recommend.js';
-export { prepareCohortPersona, runCohortOccupant, type CohortPersonaBase, type CohortPerson } from './cohort-occupant.js';
+export { prepareCohortPersona, runCohortOccupant, runCohortOccupantWithSeries, OCCUPANT_MELATONIN_STEP_H, type CohortPersonaBase, type CohortPerson, type OccupantClockSeries } from './cohort-occupant.js';
 export { shiftedSleepSpec, fixedAwakeMinutes } from './cohort-sleep-shift.js';
 export type { WeatherText } from './outdoor-light.js';
 export { withEnsemble, planEnsemble, runEnsembleJob, assembleEnsemble, figureOf as ensembleFigureOf, type EnsemblePlan, type EnsembleJob, type EnsembleJobResult } from './ensemble.js';

@@ -63,3 +63,28 @@ export function localIsoAt(timeline: ExposureTimeline, clock: LocalClock, m: num
   const ao = Math.abs(o);
   return `${t.getUTCFullYear()}-${p2(t.getUTCMonth() + 1)}-${p2(t.getUTCDate())}T${p2(t.getUTCHours())}:${p2(t.getUTCMinutes())}${sign}${p2(Math.floor(ao / 60))}:${p2(ao % 60)}`;
 }
+
+/** The UTC offset in force from a real hour of the run on (results.json `local_clock.utc_offsets`). */
+export interface UtcOffsetSpan {
+  /** Real hours since the run start. */
+  readonly from_h: number;
+  /** Offset of local time from UTC, minutes (e.g. 60 for CET, 120 for CEST). */
+  readonly utc_offset_min: number;
+}
+
+/**
+ * The run's UTC offsets: the one at the start (from 0 h), then one entry per clock change at the
+ * real hour it takes effect. With these, any real time of the run maps to its local wall-clock
+ * time (renderer/src/charts/wall-clock.ts) without the time-zone rules.
+ */
+export function utcOffsetSpans(clock: LocalClock): UtcOffsetSpan[] {
+  const spans: UtcOffsetSpan[] = [];
+  let previous: number | null = null;
+  for (let m = 0; m < clock.total_min; m++) {
+    const o = clock.offset_min[m] ?? 0;
+    if (o !== previous) spans.push({ from_h: m / 60, utc_offset_min: o });
+    previous = o;
+  }
+  if (spans.length === 0) spans.push({ from_h: 0, utc_offset_min: 0 });
+  return spans;
+}

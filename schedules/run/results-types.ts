@@ -6,6 +6,7 @@
  */
 import type { CohortSummary } from '../../model/cohort/aggregate-cohort.js';
 import type { AlignmentSummary } from './alignment.js';
+import type { UtcOffsetSpan } from './local-clock.js';
 
 export const RESULTS_FORMAT = 'zeitlight-results';
 export const RESULTS_FORMAT_VERSION = 1;
@@ -203,6 +204,12 @@ export interface RunResults {
   readonly days: readonly { readonly index: number; readonly date: string; readonly weekday: string; readonly start_local: string; readonly length_h: number }[];
   /** Local start time of each real hour of the run (the hourly arrays' index). */
   readonly hours: { readonly start_local: readonly string[] };
+  /**
+   * The local clock of the run: the UTC offset from the start and at each clock change, so a
+   * reader maps any `*_h` to local wall-clock time (a 23-hour and a 25-hour day included). Always
+   * written; optional only for results written before it existed.
+   */
+  readonly local_clock?: { readonly utc_offsets: readonly UtcOffsetSpan[] };
   readonly personas: readonly PersonaResult[];
   readonly warnings: readonly string[];
   /** Present when a cohort was run (`zeitlight run --cohort n --seed s`). */

@@ -18,7 +18,7 @@ import { BASELINE_ID, type ExposureTimeline } from '../timeline/exposure-types.j
 import { closedEyeLightSeries, entrainedStart, pacemakerFor, runBodyClockFor, sleepSpecFor } from './body-clock-run.js';
 import { eyeSeries, type EyeCaches, type EyeSeries } from './eye-series.js';
 import { mergedLightSeries } from './light-segments.js';
-import { localClock, localIsoAt, type LocalClock } from './local-clock.js';
+import { localClock, localIsoAt, utcOffsetSpans, type LocalClock } from './local-clock.js';
 import { strategyMetrics, DAYTIME_MEL_EDI_LX, KSS_SLEEPY, PRE_SLEEP_MEL_EDI_LX, PRE_SLEEP_WINDOW_H, SLEEP_MEL_EDI_LX } from './metrics.js';
 import { outdoorLight, type OutdoorLight, type WeatherText } from './outdoor-light.js';
 import { headlines, recommend } from './recommend.js';
@@ -188,6 +188,7 @@ export function runScenario(input: RunInput): RunOutput {
     },
     days: first.days.map((d) => ({ index: d.index, date: d.date, weekday: d.weekday, start_local: localIsoAt(first, clock, d.start_min), length_h: d.length_min / 60 })),
     hours: { start_local: Array.from({ length: hours }, (_, h) => localIsoAt(first, clock, h * 60)) },
+    local_clock: { utc_offsets: utcOffsetSpans(clock) },
     personas,
     warnings,
   };

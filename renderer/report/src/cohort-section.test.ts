@@ -23,7 +23,7 @@ describe('briefing cohort section', () => {
     expect(html).toContain('Phase shift vs baseline');
     expect(html).toContain('seed 4');
     expect(html).toContain('<svg');
-    expect(html).toMatch(/-0\.60 h/);
+    expect(html).toMatch(/\u22120\.60 h/);
   });
 
   it('is left out when the results have no cohort', () => {

@@ -1,12 +1,14 @@
 // Results of the run pipeline (results.json, "zeitlight-results" version 1) as the renderer's
 // results view, for the briefing's charts, plus the pipeline's own summary (headline sentences
 // and recommendation, which the briefing quotes rather than recomputes).
-// Time axis: results.json indexes real hours; the view draws local days. Each value is placed at
-// its local clock time (from the `*_local` fields), so a day with a clock change still draws
-// 00:00–24:00: the skipped spring hour stays empty, the repeated autumn hour keeps its later value.
+// Time axis: as in the app, the view keeps the run's real hours since t = 0 and carries the run's
+// UTC offsets (`local_clock`, or read back from `hours.start_local` in results written before it),
+// so the charts place every value at its local wall-clock time through the one mapping the app uses
+// (renderer/src/charts/wall-clock.ts): a 23-hour and a 25-hour day are drawn as such.
 import type { PersonaResult, RunResults, StrategyResult } from '../../../schedules/run/results-types.js';
 import type { LightSourceSeries, MetricValue, ResultsView, RunView, SourceKind } from '../../src/results/view-model.js';
 import type { PersonaSummary, StrategyHeadline } from './headlines.js';
+import { offsetsFromHourStarts, WallClock } from '../../src/charts/wall-clock.js';
 
 export const RESULTS_FORMAT_NAME = 'zeitlight-results';
 
@@ -36,17 +38,6 @@ export function localHoursOf(local: string, startDate: string): number {
   return (dayNumber(date) - dayNumber(startDate)) * 24 + hh + mm / 60 + ss / 3600;
 }
 
-/** Values per real hour placed on local-hour slots (days × 24). */
-function toLocalHours<T>(values: readonly T[], hourStarts: readonly string[], startDate: string, days: number, empty: T): T[] {
-  const out = new Array<T>(days * 24).fill(empty);
-  hourStarts.forEach((start, i) => {
-    const slot = Math.floor(localHoursOf(start, startDate) + 1e-6);
-    const v = values[i];
-    if (slot >= 0 && slot < out.length && v !== undefined) out[slot] = v;
-  });
-  return out;
-}
-
 function metric(id: string, label: string, unit: string, value: number | null, decimals: number, better: MetricValue['better'], increaseWord = 'more', decreaseWord = 'less'): MetricValue {
   return { id, label, unit, value, decimals, better, increaseWord, decreaseWord };
 }
@@ -67,23 +58,21 @@ function metricsOf(s: StrategyResult): MetricValue[] {
   ];
 }
 
-function runOf(results: RunResults, persona: PersonaResult, s: StrategyResult): RunView {
-  const { start_date: startDate, days } = results.scenario;
-  const starts = results.hours.start_local;
+function runOf(persona: PersonaResult, s: StrategyResult): RunView {
   const sources: LightSourceSeries[] = [];
   for (const [key, meta] of Object.entries(SOURCE_LABELS)) {
     const values = (s.hourly.mel_edi_lx as unknown as Record<string, number[] | undefined>)[key];
     if (values === undefined || !values.some((v) => v > 0)) continue;
-    sources.push({ id: key, label: meta.label, kind: meta.kind, mel_edi_lx: toLocalHours(values, starts, startDate, days, 0) });
+    sources.push({ id: key, label: meta.label, kind: meta.kind, mel_edi_lx: values });
   }
   return {
     personaId: persona.id,
     strategyId: s.id,
     light: { start_h: 0, step_h: 1, sources },
-    phases: s.days.map((d) => ({ day: d.index, cbtmin_h: d.cbtmin_local === null ? null : localHoursOf(d.cbtmin_local, startDate), dlmo_h: d.dlmo_local === null ? null : localHoursOf(d.dlmo_local, startDate) })),
+    phases: s.days.map((d) => ({ day: d.index, cbtmin_h: d.cbtmin_h, dlmo_h: d.dlmo_h })),
     melatonin: { time_h: [], level: [], unsuppressed: null, unit: 'pmol/L' },
-    kssHourly: toLocalHours<number | null>(s.hourly.kss, starts, startDate, days, null),
-    sleep: s.sleep_episodes.map((e) => ({ start_h: localHoursOf(e.start.local, startDate), end_h: localHoursOf(e.end.local, startDate), kind: 'sleep' as const })),
+    kssHourly: s.hourly.kss,
+    sleep: s.sleep_episodes.map((e) => ({ start_h: e.start.t_h, end_h: e.end.t_h, kind: 'sleep' as const })),
     metrics: metricsOf(s),
   };
 }
@@ -97,19 +86,21 @@ export function viewFromResults(results: RunResults, cautions: readonly string[]
     scenarioName: results.scenario.name,
     startDate: results.scenario.start_date,
     days: results.scenario.days,
+    utcOffsets: results.local_clock?.utc_offsets ?? offsetsFromHourStarts(results.hours.start_local),
     baselineId: baseline?.id ?? 'baseline',
     strategies,
     personas: results.personas.map((p) => ({ id: p.id, name: p.name })),
-    runs: results.personas.flatMap((p) => p.strategies.map((s) => runOf(results, p, s))),
+    runs: results.personas.flatMap((p) => p.strategies.map((s) => runOf(p, s))),
     cautions,
   };
 }
 
 /** Suppression per night (by the local date of melatonin onset) for each persona × strategy. */
 export function nightlySuppression(results: RunResults): Map<string, { day: number; pct: number | null }[]> {
+  const clock = new WallClock(results.local_clock?.utc_offsets ?? offsetsFromHourStarts(results.hours.start_local));
   const out = new Map<string, { day: number; pct: number | null }[]>();
   for (const p of results.personas) {
-    for (const s of p.strategies) out.set(`${p.id}:${s.id}`, s.melatonin_nights.map((n) => ({ day: Math.floor(localHoursOf(n.onset.local, results.scenario.start_date) / 24), pct: n.suppression_pct })));
+    for (const s of p.strategies) out.set(`${p.id}:${s.id}`, s.melatonin_nights.map((n) => ({ day: clock.at(n.onset.t_h).day, pct: n.suppression_pct })));
   }
   return out;
 }

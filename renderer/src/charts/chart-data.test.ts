@@ -46,10 +46,10 @@ describe('light at the eye', () => {
       { start_h: 14, end_h: 14.5, kind: 'nap' },
     ];
     expect(recommendationBands(sleep, 0)).toEqual([
-      { kind: 'night', from_h: 0, to_h: 7, limit_lx: 1, rule: 'at most' },
-      { kind: 'day', from_h: 7, to_h: 20, limit_lx: 250, rule: 'at least' },
-      { kind: 'evening', from_h: 20, to_h: 23, limit_lx: 10, rule: 'at most' },
-      { kind: 'night', from_h: 23, to_h: 24, limit_lx: 1, rule: 'at most' },
+      { kind: 'night', from_h: 0, to_h: 7, from_clock_h: 0, to_clock_h: 7, limit_lx: 1, rule: 'at most' },
+      { kind: 'day', from_h: 7, to_h: 20, from_clock_h: 7, to_clock_h: 20, limit_lx: 250, rule: 'at least' },
+      { kind: 'evening', from_h: 20, to_h: 23, from_clock_h: 20, to_clock_h: 23, limit_lx: 10, rule: 'at most' },
+      { kind: 'night', from_h: 23, to_h: 24, from_clock_h: 23, to_clock_h: 24, limit_lx: 1, rule: 'at most' },
     ]);
   });
 
@@ -64,7 +64,7 @@ describe('light at the eye', () => {
   });
 
   it('counts the share of each band meeting its recommendation from the total light', () => {
-    const rows = [0, 6, 12, 18, 21, 23].map((h) => ({ clock_h: h, total_lx: h === 6 ? 3 : h === 12 ? 400 : h === 18 ? 100 : h === 21 ? 5 : 0 }));
+    const rows = [0, 6, 12, 18, 21, 23].map((h) => ({ x_h: h, clock_h: h, total_lx: h === 6 ? 3 : h === 12 ? 400 : h === 18 ? 100 : h === 21 ? 5 : 0 }));
     const bands = recommendationBands([{ start_h: -1, end_h: 7, kind: 'sleep' }, { start_h: 23, end_h: 31, kind: 'sleep' }], 0);
     expect(bandCompliance(rows, bands).map((c) => [c.band.kind, c.met])).toEqual([
       ['night', 0.5],
@@ -104,9 +104,10 @@ describe('melatonin', () => {
 
   it('shows the night from 18:00 to 12:00 with suppressed and dark curves', () => {
     const rows = melatoninNightRows([baseline], view.strategies, 1);
-    expect(rows[0]!.hour).toBe(18);
-    expect(rows[rows.length - 1]!.hour).toBeCloseTo(36, 9);
-    const at22 = rows.find((r) => Math.abs(r.hour - 22) < 1e-9)!;
+    expect(rows[0]!.x_h).toBe(18);
+    expect(rows[rows.length - 1]!.x_h).toBeCloseTo(36, 9);
+    expect(rows[rows.length - 1]!.clock_h).toBeCloseTo(12, 9);
+    const at22 = rows.find((r) => Math.abs(r.x_h - 22) < 1e-9)!;
     expect(at22[melatoninKey('baseline')]!).toBeLessThan(at22[melatoninKey('baseline', true)]!);
   });
 });
@@ -127,7 +128,7 @@ describe('comparison table', () => {
     const dlmo = rows.find((r) => r.metricId === 'dlmo')!;
     const cell = dlmo.cells[1]!;
     expect(cell.difference).toBeCloseTo(-1.05, 9);
-    expect(cell.reading).toBe('DLMO (last day) 1.05 h earlier than baseline with Brighter morning.');
+    expect(cell.reading).toBe('DLMO (last day) 1 h 03 min earlier than baseline with Brighter morning.');
     const day = rows.find((r) => r.metricId === 'day-above-250')!.cells[1]!;
     expect(day.verdict).toBe('better');
     expect(day.reading).toContain('(favourable)');
@@ -141,7 +142,8 @@ describe('comparison table', () => {
     expect(parsed.data[0]).toEqual([...COMPARISON_CSV_HEADER]);
     expect(parsed.data).toHaveLength(1 + rows.length * 2);
     const dlmo = parsed.data.find((r) => r[1] === 'DLMO (last day)' && r[3] === 'Brighter morning')!;
-    expect(dlmo).toEqual(['Desk worker, "A"', 'DLMO (last day)', 'h', 'Brighter morning', '20.45', '-1.05', 'DLMO (last day) 1.05 h earlier than baseline with Brighter morning.']);
+    // clock times as local HH:MM, their difference in decimal hours with an ASCII minus for spreadsheets
+    expect(dlmo).toEqual(['Desk worker, "A"', 'DLMO (last day)', 'local time (difference in h)', 'Brighter morning', '20:27', '-1.05', 'DLMO (last day) 1 h 03 min earlier than baseline with Brighter morning.']);
   });
 });
 

@@ -1,12 +1,9 @@
-// Clock-time helpers for charts: hours since t = 0 to day and clock hour, and labels.
+// Clock-time helpers for charts: "HH:MM" and day labels, clock hours kept continuous across
+// midnight, clock axes. Real run time → local day and wall-clock hour lives in wall-clock.ts.
 
-export function dayOf(time_h: number): number {
-  return Math.floor(time_h / 24);
-}
-
-/** Clock hour in [0, 24). */
-export function clockHourOf(time_h: number): number {
-  return ((time_h % 24) + 24) % 24;
+/** A clock hour wrapped to [0, 24). */
+export function clockHourOf(hour: number): number {
+  return ((hour % 24) + 24) % 24;
 }
 
 /** "HH:MM" for a clock hour (any real number, wrapped to a day). */

@@ -1,8 +1,11 @@
 // CSV export of the comparison table: one line per metric × strategy, with the value, the
-// difference versus baseline and the reading. Quoting by papaparse (RFC 4180 style).
+// difference versus baseline and the reading. Quoting by papaparse (RFC 4180 style). Numbers keep
+// the ASCII minus so spreadsheets read them; clock times are local "HH:MM" with their difference
+// in decimal hours.
 import Papa from 'papaparse';
 import type { NamedItem, ResultsView } from '../results/view-model.js';
-import { comparisonRows, formatNumber, type ComparisonRow } from './comparison-data.js';
+import { comparisonRows, type ComparisonRow } from './comparison-data.js';
+import { formatClockValue, plainNumber } from './number-format.js';
 
 export const COMPARISON_CSV_HEADER = ['persona', 'metric', 'unit', 'strategy', 'value', 'difference_vs_baseline', 'reading'] as const;
 
@@ -12,10 +15,10 @@ export function comparisonCsv(personaName: string, rows: readonly ComparisonRow[
     row.cells.map((cell) => [
       personaName,
       row.label,
-      row.unit,
+      row.clock ? 'local time (difference in h)' : row.unit,
       nameOf(cell.strategyId),
-      cell.value === null ? '' : formatNumber(cell.value, row.decimals),
-      cell.difference === null ? '' : formatNumber(cell.difference, row.decimals),
+      cell.value === null ? '' : row.clock ? formatClockValue(cell.value) : plainNumber(cell.value, row.decimals),
+      cell.difference === null ? '' : plainNumber(cell.difference, row.decimals),
       cell.reading,
     ]),
   );

@@ -1,6 +1,7 @@
 // The comparison table: each metric for the baseline and every strategy, the difference
 // versus baseline, and a one-line plain reading of that difference.
 import type { MetricEnsemble, MetricValue, NamedItem, RunView } from '../results/view-model.js';
+import { formatClockValue, formatDuration, formatNumber, formatSigned, formatSignedDuration } from './number-format.js';
 
 export interface ComparisonCell {
   readonly strategyId: string;
@@ -18,21 +19,30 @@ export interface ComparisonRow {
   readonly label: string;
   readonly unit: string;
   readonly decimals: number;
+  /** Values are local clock times (hours), shown as hh:mm. */
+  readonly clock: boolean;
   readonly cells: readonly ComparisonCell[];
 }
 
-export function formatNumber(value: number | null, decimals: number): string {
-  if (value === null || !Number.isFinite(value)) return '—';
-  const text = value.toFixed(decimals);
-  return /^-0(\.0*)?$/.test(text) ? text.slice(1) : text;
+export { formatNumber };
+
+/** A metric value as shown: hh:mm for a clock time, else fixed decimals with "−" for negatives. */
+export function formatMetricValue(metric: { readonly clock?: boolean; readonly decimals: number }, value: number | null): string {
+  return metric.clock === true ? formatClockValue(value) : formatNumber(value, metric.decimals);
+}
+
+/** A difference versus baseline as shown: "+1 h 05 min" for clock times, else "+1.2" / "−0.4" / "±0.0". */
+export function formatMetricDifference(metric: { readonly clock?: boolean; readonly decimals: number }, difference: number): string {
+  return metric.clock === true ? formatSignedDuration(difference) : formatSigned(difference, metric.decimals);
 }
 
 function readingFor(metric: MetricValue, difference: number, strategyName: string, note: string | undefined): { verdict: ComparisonCell['verdict']; reading: string } {
-  const threshold = 0.5 * 10 ** -metric.decimals;
+  // Clock times compare to the minute, other values at their shown decimals.
+  const threshold = metric.clock === true ? 0.5 / 60 : 0.5 * 10 ** -metric.decimals;
   const tail = note === undefined ? '' : ` — ${note}`;
   if (Math.abs(difference) < threshold) return { verdict: 'same', reading: `${metric.label}: no change with ${strategyName}${tail}.` };
   const up = difference > 0;
-  const amount = `${formatNumber(Math.abs(difference), metric.decimals)}${metric.unit === '' ? '' : ` ${metric.unit}`}`;
+  const amount = metric.clock === true ? formatDuration(difference) : `${formatNumber(Math.abs(difference), metric.decimals)}${metric.unit === '' ? '' : ` ${metric.unit}`}`;
   const word = up ? metric.increaseWord : metric.decreaseWord;
   const verdict = metric.better === 'none' ? 'neutral' : (metric.better === 'higher') === up ? 'better' : 'worse';
   const judgement = verdict === 'better' ? ' (favourable)' : verdict === 'worse' ? ' (unfavourable)' : '';
@@ -47,6 +57,7 @@ export function comparisonRows(runs: readonly RunView[], strategies: readonly Na
     label: metric.label,
     unit: metric.unit,
     decimals: metric.decimals,
+    clock: metric.clock === true,
     cells: strategies.map((strategy): ComparisonCell => {
       const run = runs.find((r) => r.strategyId === strategy.id);
       const own = run?.metrics.find((m) => m.id === metric.id);
@@ -60,11 +71,11 @@ export function comparisonRows(runs: readonly RunView[], strategies: readonly Na
   }));
 }
 
-/** "0.30–0.55 across 3 models" ("-0.55 to -0.30 …" with negative values), or "same with all 3 models" when they agree at the shown decimals. */
+/** "0.30–0.55 across 3 models" ("−0.55 to −0.30 …" with negative values), or "same with all 3 models" when they agree at the shown decimals. */
 export function ensembleRangeText(ensemble: MetricEnsemble, decimals: number): string {
   const lo = formatNumber(ensemble.min, decimals);
   const hi = formatNumber(ensemble.max, decimals);
   if (lo === hi) return `same with all ${ensemble.models} models`;
-  // an en dash between two negative numbers reads as a minus sign
+  // an en dash beside a negative number would read as a second minus sign
   return `${lo}${ensemble.min < 0 ? ' to ' : '–'}${hi} across ${ensemble.models} models`;
 }

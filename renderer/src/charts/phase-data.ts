@@ -1,9 +1,11 @@
 // Chart data for "Body clock": CBTmin and DLMO clock times day by day for each strategy,
-// unwrapped across midnight, and the phase shift of each strategy against the baseline.
+// as the local wall clock shows them (wall-clock.ts), unwrapped across midnight, and the phase
+// shift of each strategy against the baseline (in real time: the body clock sees no clock change).
 // Convention (common practice in circadian research): an advance is a move to an earlier clock
 // time and is reported as a positive shift.
 import type { DayPhase, NamedItem, RunView } from '../results/view-model.js';
 import { clockHourOf, unwrapClockHours } from './clock.js';
+import { STEADY_CLOCK, type WallClock } from './wall-clock.js';
 
 export type PhaseMarker = 'dlmo' | 'cbtmin';
 
@@ -13,13 +15,13 @@ export function phaseKey(strategyId: string, marker: PhaseMarker): string {
   return `${strategyId}:${marker}`;
 }
 
-function clockOfDay(phase: DayPhase, marker: PhaseMarker): number | null {
+function clockOfDay(phase: DayPhase, marker: PhaseMarker, clock: WallClock): number | null {
   const t = marker === 'dlmo' ? phase.dlmo_h : phase.cbtmin_h;
-  return t === null ? null : clockHourOf(t);
+  return t === null ? null : clock.clockOf(t);
 }
 
-/** One row per day; columns `${strategy}:${marker}` hold unwrapped clock hours. */
-export function phaseByDayRows(runs: readonly RunView[], strategies: readonly NamedItem[], days: number, marker: PhaseMarker): PhaseRow[] {
+/** One row per day; columns `${strategy}:${marker}` hold unwrapped wall-clock hours. */
+export function phaseByDayRows(runs: readonly RunView[], strategies: readonly NamedItem[], days: number, marker: PhaseMarker, clock: WallClock = STEADY_CLOCK): PhaseRow[] {
   const rows: PhaseRow[] = Array.from({ length: days }, (_, day) => ({ day }) as PhaseRow);
   let reference: number | null = null;
   for (const strategy of strategies) {
@@ -27,7 +29,7 @@ export function phaseByDayRows(runs: readonly RunView[], strategies: readonly Na
     if (run === undefined) continue;
     const byDay = Array.from({ length: days }, (_, day) => {
       const p = run.phases.find((x) => x.day === day);
-      return p === undefined ? null : clockOfDay(p, marker);
+      return p === undefined ? null : clockOfDay(p, marker, clock);
     });
     const firstKnown = byDay.find((v) => v !== null) ?? null;
     reference ??= firstKnown;

@@ -3,10 +3,12 @@
 // when the running median and IQR of every metric change by less than the tolerance over the
 // last batch (optional), and summaries over occupants 0 … k − 1 only — so the result depends on
 // the seed and the occupant count, never on the number of workers or their timing.
-import { aggregateCohort, type CohortSummary, type OccupantOutcome } from '../../../model/cohort/aggregate-cohort.js';
+import { aggregateCohort, type CohortSummary } from '../../../model/cohort/aggregate-cohort.js';
+import type { OccupantClockSeries } from '../../../schedules/run/index.js';
 import { CohortConvergence, DEFAULT_COHORT_CONVERGENCE, type ConvergenceCheckpoint, type ConvergenceOptions } from '../../../model/cohort/convergence.js';
 import type { CohortSpread } from '../../../model/cohort/occupant-traits.js';
 import type { CohortWorkerToPage, PageToCohortWorker } from './cohort-protocol.js';
+import type { OccupantOutcomeWithSeries } from './occupant-job.js';
 
 /** The members of a Web Worker the pool uses (tests pass fakes). */
 export interface WorkerLike {
@@ -34,6 +36,8 @@ export interface PersonaCohort {
   readonly stopReason: StopReason;
   readonly summary: CohortSummary;
   readonly checkpoints: readonly ConvergenceCheckpoint[];
+  /** Body clock per strategy of the summarised occupants that kept it (the first SERIES_OCCUPANTS_MAX), in occupant order. */
+  readonly series: readonly Readonly<Record<string, OccupantClockSeries>>[];
 }
 
 export interface CohortProgress {
@@ -63,7 +67,7 @@ export function convergenceOptionsFor(size: number): ConvergenceOptions {
 interface PersonaState {
   readonly personaId: string;
   readonly convergence: CohortConvergence;
-  readonly outcomes: OccupantOutcome[];
+  readonly outcomes: OccupantOutcomeWithSeries[];
   next: number;
   completed: number;
   /** Occupant count the summary uses once decided. */
@@ -102,7 +106,8 @@ export function runCohortOnPool(
     personas: personas.map((p) => {
       const count = p.finalCount ?? p.convergence.contiguousOccupants;
       const outcomes = p.outcomes.slice(0, count);
-      return { personaId: p.personaId, occupants: count, stopReason: p.stopReason ?? 'stopped', summary: aggregateCohort(outcomes), checkpoints: p.convergence.checkpoints.filter((c) => c.occupants <= count) };
+      const series = outcomes.flatMap((o) => (o.series === undefined ? [] : [o.series]));
+      return { personaId: p.personaId, occupants: count, stopReason: p.stopReason ?? 'stopped', summary: aggregateCohort(outcomes), checkpoints: p.convergence.checkpoints.filter((c) => c.occupants <= count), series };
     }),
   });
 
@@ -149,7 +154,7 @@ export function runCohortOnPool(
     if (finished) return;
     const p = personas.find((x) => x.personaId === message.personaId);
     if (p === undefined) return;
-    let outcome: OccupantOutcome;
+    let outcome: OccupantOutcomeWithSeries;
     if (message.type === 'failed') {
       failures.push(`${message.personaId}, occupant ${message.occupantIndex}: ${message.message}`);
       // A failed occupant counts with no values (missing), so later occupants still count.

@@ -9,7 +9,7 @@ import type { CohortSpread, PersonaTraits } from '../../../model/cohort/occupant
 import type { OccupantOutcome } from '../../../model/cohort/aggregate-cohort.js';
 import { sampleOccupantTraits } from '../../../model/cohort/sample-occupants.js';
 import type { Scenario } from '../../../schedules/schema/scenario-types.js';
-import { prepareCohortPersona, runCohortOccupant, type CohortPerson, type CohortPersonaBase } from '../../../schedules/run/index.js';
+import { prepareCohortPersona, runCohortOccupantWithSeries, type CohortPerson, type CohortPersonaBase, type OccupantClockSeries } from '../../../schedules/run/index.js';
 
 export interface OccupantJob {
   readonly personaId: string;
@@ -28,6 +28,17 @@ export const COHORT_METRICS = [
 ] as const;
 
 export type CohortMetricId = (typeof COHORT_METRICS)[number]['id'];
+
+/**
+ * Occupants whose body-clock markers and melatonin curve are kept for the cohort bands on the
+ * Body clock and Melatonin charts (the first ones in order; a few MB at most).
+ */
+export const SERIES_OCCUPANTS_MAX = 500;
+
+/** An occupant's outcome with, for the first SERIES_OCCUPANTS_MAX occupants, its body clock per strategy. */
+export interface OccupantOutcomeWithSeries extends OccupantOutcome {
+  readonly series?: Readonly<Record<string, OccupantClockSeries>>;
+}
 
 /** Scenario limits of the traits (schedules/schema/personas-schema.ts). */
 const PERIOD_LIMITS_H = [23, 25.5] as const;
@@ -69,9 +80,9 @@ export class OccupantRunner {
     return base;
   }
 
-  run(job: OccupantJob): OccupantOutcome {
+  run(job: OccupantJob): OccupantOutcomeWithSeries {
     const { age_y, person } = occupantPerson(this.scenario, job);
-    const summaries = runCohortOccupant(this.preparedFor(job.personaId, age_y), person);
+    const { summaries, series } = runCohortOccupantWithSeries(this.preparedFor(job.personaId, age_y), person);
     const byStrategy: Record<string, Record<CohortMetricId, number | null>> = {};
     for (const [id, m] of Object.entries(summaries)) {
       byStrategy[id] = {
@@ -82,10 +93,10 @@ export class OccupantRunner {
         sleepDuration_h: m.mean_sleep_duration_h,
       };
     }
-    return { occupantIndex: job.occupantIndex, byStrategy };
+    return job.occupantIndex < SERIES_OCCUPANTS_MAX ? { occupantIndex: job.occupantIndex, byStrategy, series } : { occupantIndex: job.occupantIndex, byStrategy };
   }
 }
 
-export function runOccupantJob(scenario: Scenario, job: OccupantJob): OccupantOutcome {
+export function runOccupantJob(scenario: Scenario, job: OccupantJob): OccupantOutcomeWithSeries {
   return new OccupantRunner(scenario).run(job);
 }

@@ -62,8 +62,8 @@ function lastDayClock(days: readonly { readonly dlmo_local: string | null; reado
 function metricsOf(s: StrategyResult): MetricValue[] {
   const m = s.summary;
   return [
-    metric('dlmo', 'DLMO (last day, local clock)', 'h', lastDayClock(s.days, 'dlmo_local', true), 2, 'none', 'later', 'earlier'),
-    metric('cbtmin', 'CBTmin (last day, local clock)', 'h', lastDayClock(s.days, 'cbtmin_local', false), 2, 'none', 'later', 'earlier'),
+    { ...metric('dlmo', 'DLMO (last day, local clock)', 'h', lastDayClock(s.days, 'dlmo_local', true), 2, 'none', 'later', 'earlier'), clock: true },
+    { ...metric('cbtmin', 'CBTmin (last day, local clock)', 'h', lastDayClock(s.days, 'cbtmin_local', false), 2, 'none', 'later', 'earlier'), clock: true },
     metric('phase-shift', 'Body-clock shift vs baseline (last 7 days)', 'h', m.mean_phase_shift_h, 2, 'none', 'later', 'earlier'),
     metric('misalignment', 'Misalignment with work and sleep hours (mean per day)', 'h', s.alignment?.misalignment_h_per_day ?? null, 1, 'lower', 'more', 'less'),
     metric('day-above-250', 'Daytime hours ≥ 250 lx mEDI (mean per day)', 'h', m.mean_daytime_hours_ge_250_lx, 1, 'higher', 'more', 'fewer'),
@@ -92,6 +92,7 @@ function runView(tl: TimelineLight, s: StrategyResult, phaseNote?: string): RunV
     melatonin: { time_h: tl.melatonin.t_h.slice(0, n), level: tl.melatonin.plasma_pmol_L.slice(0, n), unsuppressed: tl.melatonin.dim_pmol_L.slice(0, n), unit: 'pmol/L' },
     kssHourly: s.hourly.kss,
     sleep: s.sleep_episodes.map((e) => ({ start_h: e.start.t_h, end_h: e.end.t_h, kind: e.duration_h < 3 ? 'nap' : 'sleep' })),
+    headlines: s.headlines.map((h) => ({ metric: h.metric, value: h.value, baseline: h.baseline, sentence: h.sentence })),
     metrics: metricsOf(s).map((m) => (phaseNote !== undefined && PHASE_METRIC_IDS.includes(m.id) ? { ...m, note: phaseNote } : m)),
     alignment: s.alignment,
   };
@@ -118,6 +119,7 @@ export function viewFromRun(out: RunOutput, scenario: Scenario): ResultsView {
     scenarioName: r.scenario.name,
     startDate: r.scenario.start_date,
     days: r.scenario.days,
+    ...(r.local_clock === undefined ? {} : { utcOffsets: r.local_clock.utc_offsets }),
     baselineId: 'baseline',
     strategies: [{ id: 'baseline', name: 'Baseline' }, ...scenario.strategies.map((s) => ({ id: s.id, name: s.name }))],
     personas: r.personas.map((p) => ({ id: p.id, name: p.name })),

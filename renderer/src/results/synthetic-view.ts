@@ -60,7 +60,7 @@ function run(personaId: string, strategyId: string, days: number, morningBoost_l
     kssHourly,
     sleep,
     metrics: [
-      metric('dlmo', 'DLMO (last day)', 'h', 21.5 - finalShift, 2, 'none', 'later', 'earlier'),
+      { ...metric('dlmo', 'DLMO (last day)', 'h', 21.5 - finalShift, 2, 'none', 'later', 'earlier'), clock: true },
       metric('day-above-250', 'Daytime hours ≥ 250 lx mEDI', 'h', 2 + morningBoost_lx / 100, 1, 'higher', 'more', 'fewer'),
       metric('suppression', 'Evening melatonin suppression', '%', 4, 1, 'lower', 'more', 'less'),
       metric('kss7', 'Awake hours with KSS ≥ 7', 'h', days * 1, 0, 'lower', 'more', 'fewer'),

@@ -1,7 +1,8 @@
 // What the results views draw. These types are the renderer's own; results-adapter.ts is the
 // one module that fills them from the run pipeline's results, so a change of the results
 // format touches that file only. Times are hours since t = 0 (local midnight of day 0 at the
-// site), as in the CLI contract.
+// site, counted in real hours through clock changes), as in the CLI contract.
+import type { UtcOffsetSpan } from '../../../schedules/run/local-clock.js';
 import type { AlignmentSummary } from '../../../schedules/run/alignment.js';
 
 export type SourceKind = 'daylight' | 'electric' | 'screen' | 'outdoor' | 'measured' | 'other';
@@ -51,6 +52,8 @@ export interface MetricValue {
   readonly decimals: number;
   /** Which direction is the favourable one, if any. */
   readonly better: 'higher' | 'lower' | 'none';
+  /** The value is a local clock time in hours (24 and over: after midnight), shown as hh:mm; differences in h and min. */
+  readonly clock?: boolean;
   /** Words for an increase and a decrease, e.g. "later" / "earlier" for a clock time. */
   readonly increaseWord: string;
   readonly decreaseWord: string;
@@ -87,8 +90,18 @@ export interface RunView {
   readonly kssHourly: readonly (number | null)[];
   readonly sleep: readonly Episode[];
   readonly metrics: readonly MetricValue[];
+  /** The run's headline figures as results.json gives them (`headlines`: value, baseline, sentence per metric); absent in synthetic views. */
+  readonly headlines?: readonly RunHeadline[];
   /** Alignment of the body clock with the person's work and sleep hours (results.json `alignment`); absent in synthetic views. */
   readonly alignment?: AlignmentSummary | null;
+}
+
+/** A headline of results.json: phase shift (h, + later), melatonin suppression (%), share of work hours at KSS ≥ 7 (0–1). */
+export interface RunHeadline {
+  readonly metric: 'phase_shift_h' | 'melatonin_suppression_pct' | 'work_hours_kss_ge_7_share';
+  readonly value: number | null;
+  readonly baseline: number | null;
+  readonly sentence: string;
 }
 
 export interface NamedItem {
@@ -101,6 +114,12 @@ export interface ResultsView {
   /** Local date of day 0, "YYYY-MM-DD". */
   readonly startDate: string;
   readonly days: number;
+  /**
+   * The run's UTC offsets from the start and at each clock change (results.json
+   * `local_clock.utc_offsets`); charts map run time to wall-clock time through them
+   * (charts/wall-clock.ts). Absent: no clock change (24-hour days).
+   */
+  readonly utcOffsets?: readonly UtcOffsetSpan[];
   readonly baselineId: string;
   /** Baseline first, then the strategies in scenario order. */
   readonly strategies: readonly NamedItem[];

@@ -98,7 +98,7 @@ export class WorkspaceController {
 
   newDocument(): void {
     const today = new Date().toISOString().slice(0, 10);
-    this.store.load(newScenario(today), 'Untitled', null, true);
+    this.store.load(newScenario(today), 'Untitled', null, true, 'editor');
   }
 
   async open(): Promise<void> {

@@ -27,6 +27,8 @@ export interface WorkspaceState {
   /** Progress of a briefing export under way, else null. */
   readonly exportProgress: { readonly fraction: number; readonly stage: string } | null;
   readonly notice: { readonly text: string; readonly tone: 'info' | 'error' } | null;
+  /** Which view a freshly loaded document opens on: the answer (summary) or, for a new empty document, an editor; `seq` counts loads. */
+  readonly landing: { readonly seq: number; readonly on: 'answer' | 'editor' };
 }
 
 export function isDirty(state: WorkspaceState): boolean {
@@ -46,6 +48,7 @@ export class WorkspaceStore {
     progressVisible: false,
     exportProgress: null,
     notice: null,
+    landing: { seq: 0, on: 'answer' },
   };
   private readonly listeners = new Set<Listener>();
   /** What happened, kept after the screen has moved on (results runs, notices). */
@@ -65,9 +68,12 @@ export class WorkspaceStore {
     for (const l of this.listeners) l();
   }
 
-  /** Loads a document; `unsaved` marks a recovered draft or a new document as not yet saved. */
-  load(scenario: ScenarioInput, displayName: string, path: string | null, unsaved = false): void {
-    this.set({ history: startHistory<ScenarioInput | null>(scenario), displayName, path, saved: unsaved ? null : scenario, problems: [], results: { status: 'idle' } });
+  /**
+   * Loads a document; `unsaved` marks a recovered draft or a new document as not yet saved. A
+   * document opens on its answer (the summary), a new empty one on an editor.
+   */
+  load(scenario: ScenarioInput, displayName: string, path: string | null, unsaved = false, on: 'answer' | 'editor' = 'answer'): void {
+    this.set({ history: startHistory<ScenarioInput | null>(scenario), displayName, path, saved: unsaved ? null : scenario, problems: [], results: { status: 'idle' }, landing: { seq: this.state.landing.seq + 1, on } });
   }
 
   /** Applies an edit; edits with the same key in quick succession merge into one undo step. */

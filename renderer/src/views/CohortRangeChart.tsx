@@ -2,7 +2,10 @@
 // a dark band and the median as a tick, on one horizontal axis in the metric's unit.
 import { Bar, BarChart, CartesianGrid, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { OKABE_ITO } from '../charts/palette.js';
-import { formatNumber } from '../charts/comparison-data.js';
+import { formatNumber } from '../charts/number-format.js';
+import { niceTicks } from '../charts/nice-ticks.js';
+import { ChartFigure } from './ChartFigure.js';
+import { wrapWords } from '../charts/wrap-words.js';
 import type { RangeRow } from '../cohort/cohort-ranges.js';
 
 interface Datum {
@@ -13,14 +16,32 @@ interface Datum {
   readonly row: RangeRow;
 }
 
+const NAME_WIDTH_PX = 200;
+const NAME_CHARS_PER_LINE = 26;
+
+/** A category tick that wraps a strategy name over lines instead of cutting it. */
+function WrappedName(props: { x?: number; y?: number; payload?: { value?: unknown } }) {
+  const lines = wrapWords(String(props.payload?.value ?? ''), NAME_CHARS_PER_LINE);
+  const lineH = 14;
+  return (
+    <text x={props.x ?? 0} y={(props.y ?? 0) - ((lines.length - 1) * lineH) / 2} textAnchor="end" fontSize={12} fill="#4a5563" dominantBaseline="central">
+      {lines.map((line, i) => (
+        <tspan key={i} x={(props.x ?? 0) - 4} dy={i === 0 ? 0 : lineH}>
+          {line}
+        </tspan>
+      ))}
+    </text>
+  );
+}
+
 export function CohortRangeChart({ rows, title }: { rows: readonly RangeRow[]; title: string }) {
   const usable = rows.filter((r) => r.p05 !== null && r.p95 !== null && r.q25 !== null && r.q75 !== null && r.median !== null);
   if (usable.length === 0) return null;
   const lo = Math.min(...usable.map((r) => r.p05 as number));
   const hi = Math.max(...usable.map((r) => r.p95 as number));
-  // Padding around the widest range; a cohort without spread still gets a readable axis.
-  const pad = hi - lo > 0 ? (hi - lo) * 0.05 : Math.max(0.5, Math.abs(hi) * 0.02);
-  const domain: [number, number] = [lo - pad, hi + pad];
+  // Round ticks around the widest range; a cohort without spread still gets a readable axis.
+  const axis = niceTicks(lo, hi === lo ? hi + Math.max(0.5, Math.abs(hi) * 0.02) : hi, 6);
+  const domain = axis.domain;
   const half = (domain[1] - domain[0]) * 0.004;
   const data: Datum[] = usable.map((r) => ({
     name: r.strategyName,
@@ -32,17 +53,14 @@ export function CohortRangeChart({ rows, title }: { rows: readonly RangeRow[]; t
   const unit = usable[0]?.unit ?? '';
   const decimals = usable[0]?.decimals ?? 1;
   return (
-    <figure className="chart cohort-range-chart" aria-label={`${title}: ranges across occupants`}>
-      <figcaption>
-        {title} ({unit}) — <span className="legend-outer">5–95 %</span>, <span className="legend-inner">interquartile range</span>, median tick
-      </figcaption>
-      <ResponsiveContainer width="100%" height={Math.max(120, 44 * data.length + 50)}>
-        <BarChart data={data} layout="vertical" margin={{ top: 8, right: 24, bottom: 8, left: 72 }} barGap={0}>
+    <ChartFigure className="cohort-range-chart" label={`${title}: ranges across occupants`} heading={<>{title} ({unit}) — <span className="legend-outer">5–95 %</span>, <span className="legend-inner">interquartile range</span>, median tick</>}>
+      <ResponsiveContainer width="100%" height={Math.max(130, 48 * data.length + 50)}>
+        <BarChart data={data} layout="vertical" margin={{ top: 8, right: 24, bottom: 8, left: 8 }} barGap={0}>
           <CartesianGrid stroke="#e3e6ea" horizontal={false} />
-          <XAxis type="number" domain={domain} tickCount={5} tickFormatter={(v: number) => formatNumber(v, decimals)} />
-          <YAxis yAxisId="outer" type="category" dataKey="name" width={190} tick={{ fontSize: 12 }} tickFormatter={(name: string) => (name.length > 24 ? `${name.slice(0, 23)}…` : name)} />
-          <YAxis yAxisId="inner" type="category" dataKey="name" hide />
-          <YAxis yAxisId="tick" type="category" dataKey="name" hide />
+          <XAxis type="number" domain={domain} ticks={axis.ticks} tickFormatter={(v: number) => `${formatNumber(v, axis.decimals)}${unit === '%' ? ' %' : ''}`} />
+          <YAxis yAxisId="outer" type="category" dataKey="name" width={NAME_WIDTH_PX} tick={<WrappedName />} interval={0} />
+          <YAxis yAxisId="inner" type="category" dataKey="name" hide width={0} />
+          <YAxis yAxisId="tick" type="category" dataKey="name" hide width={0} />
           <Tooltip
             cursor={{ fill: 'rgba(0, 0, 0, 0.04)' }}
             content={({ active, payload }) => {
@@ -69,6 +87,6 @@ export function CohortRangeChart({ rows, title }: { rows: readonly RangeRow[]; t
           <Bar yAxisId="tick" dataKey="tick" fill={OKABE_ITO.black} barSize={30} minPointSize={2} isAnimationActive={false} />
         </BarChart>
       </ResponsiveContainer>
-    </figure>
+    </ChartFigure>
   );
 }

@@ -2,7 +2,7 @@
 // and a one-line reading; once the model ensemble has run, each headline value's range across
 // the models beside it and, in words, any strategy whose rank changes with the model.
 import type { ResultsView } from '../results/view-model.js';
-import { comparisonRows, ensembleRangeText, formatNumber } from '../charts/comparison-data.js';
+import { comparisonRows, ensembleRangeText, formatMetricDifference, formatMetricValue } from '../charts/comparison-data.js';
 import { useEnsembleView } from '../state/use-ensemble-view.js';
 import { ensembleModelsWords } from '../results/ensemble-view.js';
 
@@ -35,7 +35,7 @@ export function CompareView({ view: shown, personaId, onExport }: { view: Result
             <tr key={row.metricId}>
               <th scope="row">
                 {row.label}
-                {row.unit !== '' && <span className="unit"> ({row.unit})</span>}
+                {row.unit !== '' && !row.clock && <span className="unit"> ({row.unit})</span>}
               </th>
               {row.cells.map((cell) => (
                 <td
@@ -47,13 +47,8 @@ export function CompareView({ view: shown, personaId, onExport }: { view: Result
                   data-value={cell.value ?? ''}
                   {...(cell.ensemble === undefined ? {} : { 'data-ensemble-min': cell.ensemble.min, 'data-ensemble-max': cell.ensemble.max, 'data-ensemble-models': cell.ensemble.models })}
                 >
-                  <span className="value">{formatNumber(cell.value, row.decimals)}</span>
-                  {cell.difference !== null && (
-                    <span className="difference">
-                      {cell.difference > 0 ? '+' : cell.difference < 0 ? '−' : '±'}
-                      {formatNumber(Math.abs(cell.difference), row.decimals)}
-                    </span>
-                  )}
+                  <span className="value">{formatMetricValue(row, cell.value)}</span>
+                  {cell.difference !== null && <span className="difference">{formatMetricDifference(row, cell.difference)}</span>}
                   {cell.ensemble !== undefined && <span className="ensemble-range">{ensembleRangeText(cell.ensemble, row.decimals)}</span>}
                 </td>
               ))}

@@ -1,5 +1,6 @@
-// Light at the eye: melanopic EDI over one day, stacked by source, with the recommendation
-// bands (Brown et al. 2022) drawn in.
+// Light at the eye: melanopic EDI over one local day, stacked by source on a capped linear axis
+// or as the total on a log axis (the choice is remembered), with the recommendation bands
+// (Brown et al. 2022) drawn in. The x axis is the day's real length with wall-clock ticks.
 import { useState } from 'react';
 import { Area, CartesianGrid, ComposedChart, Legend, Line, ReferenceArea, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import type { ResultsView } from '../results/view-model.js';
@@ -7,19 +8,35 @@ import { findRun } from '../results/view-model.js';
 import { bandCompliance, lightAtEyeRows, recommendationBands } from '../charts/light-at-eye-data.js';
 import { BAND_COLOURS, SOURCE_KIND_COLOURS } from '../charts/palette.js';
 import { formatClock } from '../charts/clock.js';
+import { wallClockOf } from '../charts/wall-clock.js';
+import { formatLux, lightAxisTop_lx, logLightTicks, LOG_FLOOR_LX, type LightScale } from '../charts/light-scale.js';
+import { niceTicks } from '../charts/nice-ticks.js';
+import { ChartFigure } from './ChartFigure.js';
+import { useRememberedChoice } from './remembered-choice.js';
 
 const BAND_TEXT = { day: 'Day: ≥ 250 lx', evening: 'Evening: ≤ 10 lx', night: 'Night: ≤ 1 lx' } as const;
+const SCALES: readonly LightScale[] = ['capped', 'log'];
+const AXIS_INK = '#4a5563';
 
 export function LightAtEyeView({ view, personaId, day }: { view: ResultsView; personaId: string; day: number }) {
   const [strategyId, setStrategyId] = useState(view.baselineId);
-  const [scale, setScale] = useState<'linear' | 'log'>('linear');
+  const [scale, setScale] = useRememberedChoice<LightScale>('light-scale', SCALES, 'capped');
   const run = findRun(view, personaId, strategyId) ?? findRun(view, personaId, view.baselineId);
   if (run === undefined) return <p className="empty">No results for this person.</p>;
-  const rows = lightAtEyeRows(run.light, day);
-  const bands = recommendationBands(run.sleep, day);
+  const clock = wallClockOf(view);
+  const axis = clock.dayAxis(day);
+  const rows = lightAtEyeRows(run.light, day, 10, clock);
+  const bands = recommendationBands(run.sleep, day, clock);
   const compliance = bandCompliance(rows, bands);
-  const logRows = rows.map((r) => ({ clock_h: r.clock_h, total_lx: Math.max(0.1, r.total_lx) }));
+  const capped = lightAxisTop_lx(rows.map((r) => r.total_lx));
+  const linear = niceTicks(0, capped.top, 6);
+  const peakRow = rows.reduce<(typeof rows)[number] | undefined>((best, r) => (best === undefined || r.total_lx > best.total_lx ? r : best), undefined);
+  const log = logLightTicks(capped.peak);
+  const logRows = rows.map((r) => ({ x_h: r.x_h, total_lx: Math.max(LOG_FLOOR_LX, r.total_lx) }));
   const available = view.strategies.filter((s) => view.runs.some((r) => r.personaId === personaId && r.strategyId === s.id));
+  const name = view.strategies.find((s) => s.id === run.strategyId)?.name ?? run.strategyId;
+  const change = clock.changeNote(day);
+  const cut = scale === 'capped' && capped.peak > linear.domain[1];
   return (
     <div className="chart-block">
       <div className="chart-toolbar">
@@ -33,32 +50,43 @@ export function LightAtEyeView({ view, personaId, day }: { view: ResultsView; pe
             ))}
           </select>
         </label>
-        <div className="segmented" role="radiogroup" aria-label="Scale">
-          {(['linear', 'log'] as const).map((s) => (
+        <div className="segmented" role="radiogroup" aria-label="Light scale">
+          {SCALES.map((s) => (
             <button key={s} type="button" role="radio" aria-checked={scale === s} className={scale === s ? 'seg seg-on' : 'seg'} onClick={() => setScale(s)}>
-              {s === 'linear' ? 'Stacked by source' : 'Total, log scale'}
+              {s === 'capped' ? 'By source, capped axis' : 'Total, log axis'}
             </button>
           ))}
         </div>
       </div>
-      <figure className="chart" aria-label="Melanopic EDI at the eye over the day">
+      {change !== null && <p className="clock-note">{change}; the axis shows the day’s real length.</p>}
+      <ChartFigure
+        label={`Melanopic EDI at the eye — ${name}`}
+        caption={
+          <>
+            {cut && peakRow !== undefined && `Peaks above ${formatLux(linear.domain[1])} lx are cut (highest ${formatLux(capped.peak)} lx at ${formatClock(peakRow.clock_h)}); the log axis shows them whole. `}
+            Dashed lines: recommended melanopic EDI at the eye — at least 250 lx by day, at most 10 lx in the 3 h before sleep, at most 1 lx during sleep (Brown et al. 2022, PLOS Biology 20:e3001571). Local clock time.
+          </>
+        }
+      >
         <ResponsiveContainer width="100%" height={360}>
-          <ComposedChart data={scale === 'linear' ? rows : logRows} margin={{ top: 16, right: 24, bottom: 8, left: 8 }}>
+          <ComposedChart data={scale === 'capped' ? rows : logRows} margin={{ top: 12, right: 24, bottom: 8, left: 8 }}>
             <CartesianGrid stroke="#e3e6ea" vertical={false} />
             {bands.map((b, i) => (
               <ReferenceArea key={`a${i}`} x1={b.from_h} x2={b.to_h} fill={BAND_COLOURS[b.kind]} fillOpacity={b.kind === 'night' ? 0.06 : 0.05} ifOverflow="hidden" />
             ))}
-            <XAxis dataKey="clock_h" type="number" domain={[0, 24]} ticks={[0, 3, 6, 9, 12, 15, 18, 21, 24]} tickFormatter={(h: number) => formatClock(h === 24 ? 0 : h)} />
+            <XAxis dataKey="x_h" type="number" domain={axis.domain} ticks={axis.ticks} tickFormatter={axis.labelOf} />
             <YAxis
               scale={scale === 'log' ? 'log' : 'linear'}
-              domain={scale === 'log' ? [0.1, 'auto'] : [0, 'auto']}
-              allowDataOverflow={scale === 'log'}
-              label={{ value: 'melanopic EDI (lx)', angle: -90, position: 'insideLeft', style: { textAnchor: 'middle', fill: '#4a5563' } }}
-              tickFormatter={(v: number) => (v >= 1000 ? `${v / 1000}k` : String(v))}
+              domain={scale === 'log' ? log.domain : linear.domain}
+              ticks={scale === 'log' ? log.ticks : linear.ticks}
+              allowDataOverflow
+              width={64}
+              label={{ value: scale === 'log' ? 'melanopic EDI (lx, log)' : 'melanopic EDI (lx)', angle: -90, position: 'insideLeft', style: { textAnchor: 'middle', fill: AXIS_INK } }}
+              tickFormatter={formatLux}
             />
-            <Tooltip labelFormatter={(h) => formatClock(Number(h))} formatter={(v, name) => [`${Number(v).toFixed(1)} lx`, String(name)]} />
+            <Tooltip labelFormatter={(x) => axis.labelOf(Number(x))} formatter={(v, n) => [`${formatLux(Number(v))} lx`, String(n)]} />
             <Legend />
-            {scale === 'linear' &&
+            {scale === 'capped' &&
               run.light.sources.map((s) => <Area key={s.id} type="stepAfter" dataKey={s.id} name={s.label} stackId="light" stroke={SOURCE_KIND_COLOURS[s.kind]} fill={SOURCE_KIND_COLOURS[s.kind]} fillOpacity={0.55} isAnimationActive={false} />)}
             {scale === 'log' && <Line type="stepAfter" dataKey="total_lx" name="All sources" stroke="#1b1b1b" dot={false} isAnimationActive={false} />}
             {bands.map((b, i) => (
@@ -76,15 +104,12 @@ export function LightAtEyeView({ view, personaId, day }: { view: ResultsView; pe
             ))}
           </ComposedChart>
         </ResponsiveContainer>
-        <figcaption>
-          Dashed lines: recommended melanopic EDI at the eye — at least 250 lx by day, at most 10 lx in the 3 h before sleep, at most 1 lx during sleep (Brown et al. 2022, PLOS Biology 20:e3001571).
-        </figcaption>
-      </figure>
+      </ChartFigure>
       <ul className="compliance" aria-label="Time meeting the recommendations">
         {compliance.map((c, i) => (
           <li key={i}>
             <span className="swatch" style={{ background: BAND_COLOURS[c.band.kind] }} />
-            {BAND_TEXT[c.band.kind]} {formatClock(c.band.from_h)}–{formatClock(c.band.to_h)}: <strong>{Math.round(c.met * 100)} %</strong> of the time met
+            {BAND_TEXT[c.band.kind]} {formatClock(c.band.from_clock_h)}–{c.band.to_clock_h >= 24 ? '24:00' : formatClock(c.band.to_clock_h)}: <strong>{Math.round(c.met * 100)} %</strong> of the time met
           </li>
         ))}
       </ul>

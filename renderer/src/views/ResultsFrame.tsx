@@ -54,6 +54,7 @@ export function ResultsFrame({
   selection,
   onSelect,
   showDay,
+  showPerson = true,
   children,
 }: {
   title: string;
@@ -62,6 +63,8 @@ export function ResultsFrame({
   selection: ResultsSelection;
   onSelect: (s: ResultsSelection) => void;
   showDay: boolean;
+  /** False for views that show every person at once (the summary). */
+  showPerson?: boolean;
   children: (view: ResultsView, personaId: string) => ReactNode;
 }) {
   const view = results.status === 'ready' ? results.view : results.status === 'running' ? results.previous : null;
@@ -79,8 +82,9 @@ export function ResultsFrame({
       )}
       <Cautions />
       {view !== null && <RunNotes view={view} />}
-      {view !== null && (
+      {view !== null && (showPerson || showDay) && (
         <div className="results-controls">
+          {showPerson && (
           <label>
             Person
             <select value={personaId} onChange={(e) => onSelect({ ...selection, personaId: e.target.value })}>
@@ -91,6 +95,7 @@ export function ResultsFrame({
               ))}
             </select>
           </label>
+          )}
           {showDay && (
             <label className="day-picker">
               Day
@@ -101,7 +106,7 @@ export function ResultsFrame({
         </div>
       )}
       {results.status === 'idle' && <p className="empty">Open or create a scenario to see results.</p>}
-      {results.status === 'running' && results.previous === null && <p className="empty">Simulating… {results.stage}</p>}
+      {results.status === 'running' && results.previous === null && <p className="empty">Running the scenario ({results.stage}); the results appear here when it is done.</p>}
       {results.status === 'unavailable' && <p className="empty">{results.message}</p>}
       {results.status === 'failed' && <p className="empty empty-error">{results.message}</p>}
       {view !== null && <div className="results-body">{children(view, personaId)}</div>}

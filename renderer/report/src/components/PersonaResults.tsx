@@ -2,12 +2,13 @@
 // recommended strategy), phase by day, melatonin, KSS by hour and a KSS grid, metrics table.
 import type { ResultsView } from '../../../src/results/view-model.js';
 import { findRun } from '../../../src/results/view-model.js';
-import { comparisonRows, ensembleRangeText, formatNumber } from '../../../src/charts/comparison-data.js';
+import { comparisonRows, ensembleRangeText, formatMetricDifference, formatMetricValue, formatNumber } from '../../../src/charts/comparison-data.js';
 import { ensembleModelsWords } from '../../../src/results/ensemble-view.js';
 import { kssGrid } from '../../../src/charts/kss-grid-data.js';
 import { kssColour } from '../../../src/charts/palette.js';
 import { bandCompliance, lightAtEyeRows, recommendationBands } from '../../../src/charts/light-at-eye-data.js';
 import { formatClock, formatDayLabel } from '../../../src/charts/clock.js';
+import { wallClockOf } from '../../../src/charts/wall-clock.js';
 import type { PersonaSummary } from '../headlines.js';
 import { lightAxisTop_lx, PrintKssChart, PrintLightChart, PrintLightCompareChart, PrintMelatoninChart, PrintPhaseChart, PrintSuppressionChart } from './print-charts.js';
 import { Section } from './sections.js';
@@ -17,14 +18,15 @@ const BAND_WORDS = { day: 'day (≥ 250 lx)', evening: 'evening (≤ 10 lx)', ni
 function ComplianceLine({ view, personaId, strategyId, day }: { view: ResultsView; personaId: string; strategyId: string; day: number }) {
   const run = findRun(view, personaId, strategyId);
   if (run === undefined) return null;
-  const compliance = bandCompliance(lightAtEyeRows(run.light, day, 10), recommendationBands(run.sleep, day));
+  const clock = wallClockOf(view);
+  const compliance = bandCompliance(lightAtEyeRows(run.light, day, 10, clock), recommendationBands(run.sleep, day, clock));
   return (
     <p className="chart-note">
       Time meeting the recommendation:{' '}
       {compliance.map((c, i) => (
         <span key={i}>
           {i > 0 ? '; ' : ''}
-          {BAND_WORDS[c.band.kind]} {formatClock(c.band.from_h)}–{formatClock(c.band.to_h)} {Math.round(c.met * 100)} %
+          {BAND_WORDS[c.band.kind]} {formatClock(c.band.from_clock_h)}–{c.band.to_clock_h >= 24 ? '24:00' : formatClock(c.band.to_clock_h)} {Math.round(c.met * 100)} %
         </span>
       ))}
       .
@@ -35,7 +37,7 @@ function ComplianceLine({ view, personaId, strategyId, day }: { view: ResultsVie
 function KssGridTable({ view, personaId, strategyId }: { view: ResultsView; personaId: string; strategyId: string }) {
   const run = findRun(view, personaId, strategyId);
   if (run === undefined) return null;
-  const grid = kssGrid(run.kssHourly, view.days);
+  const grid = kssGrid(run.kssHourly, view.days, wallClockOf(view));
   const name = view.strategies.find((s) => s.id === strategyId)?.name ?? strategyId;
   return (
     <figure className="chart keep">
@@ -53,14 +55,25 @@ function KssGridTable({ view, personaId, strategyId }: { view: ResultsView; pers
           {grid.map((row, d) => (
             <tr key={d}>
               <th scope="row">{formatDayLabel(view.startDate, d)}</th>
-              {row.map((cell) => (
-                <td key={cell.hour} className={cell.sleepy ? 'kss-sleepy' : cell.kss === null ? 'kss-none' : undefined} style={cell.kss === null ? undefined : { background: kssColour(cell.kss) }} />
-              ))}
+              {row.map((cell) =>
+                cell.parts.length === 2 ? (
+                  // the hour the clocks repeat: both real hours, side by side
+                  <td key={cell.hour} className="kss-repeated">
+                    <div className="kss-pair">
+                      {cell.parts.map((p) => (
+                        <span key={p.index} className={p.sleepy ? 'kss-half kss-sleepy' : p.kss === null ? 'kss-half kss-none' : 'kss-half'} style={p.kss === null ? undefined : { background: kssColour(p.kss) }} />
+                      ))}
+                    </div>
+                  </td>
+                ) : (
+                  <td key={cell.hour} className={cell.parts.length === 0 ? 'kss-skipped' : cell.sleepy ? 'kss-sleepy' : cell.kss === null ? 'kss-none' : undefined} style={cell.kss === null ? undefined : { background: kssColour(cell.kss) }} />
+                ),
+              )}
             </tr>
           ))}
         </tbody>
       </table>
-      <p className="chart-note">Darker = sleepier (KSS 1 extremely alert … 9 very sleepy). Outlined: KSS ≥ 7. Grey: asleep.</p>
+      <p className="chart-note">Darker = sleepier (KSS 1 extremely alert … 9 very sleepy). Outlined: KSS ≥ 7. Grey: asleep. Local clock time{wallClockOf(view).changes ? '; crossed out: the hour skipped when the clocks go forward; split: the hour lived twice when they go back' : ''}.</p>
     </figure>
   );
 }
@@ -97,11 +110,11 @@ function MetricsTable({ view, personaId }: { view: ResultsView; personaId: strin
             </td>
             {row.cells.map((c) => (
               <td key={c.strategyId} className={`num verdict-${c.verdict}`} {...(c.ensemble === undefined ? {} : { 'data-ensemble-min': c.ensemble.min, 'data-ensemble-max': c.ensemble.max })}>
-                {formatNumber(c.value, row.decimals)}
+                {formatMetricValue(row, c.value)}
                 {c.difference !== null && (
                   <span className="diff">
                     {' '}
-                    ({signedDifference(c.difference, row.decimals)})
+                    ({row.clock ? formatMetricDifference(row, c.difference) : signedDifference(c.difference, row.decimals)})
                   </span>
                 )}
                 {c.ensemble !== undefined && <span className="ensemble-range">{ensembleRangeText(c.ensemble, row.decimals)}</span>}

@@ -1,14 +1,18 @@
 // Charts sized for a printed page: fixed pixel sizes (no resize observer), no animation, no
 // tooltips; drawn as SVG so the PDF keeps them as vectors. Data come from the app's chart-data
-// modules (renderer/src/charts/*), colours from its palette.
+// modules (renderer/src/charts/*), colours from its palette, and times go through the app's one
+// run-time → wall-clock mapping (charts/wall-clock.ts): one-day charts span the day's real length
+// (23 h or 25 h on a day the clocks change) with wall-clock ticks.
 import { Area, CartesianGrid, ComposedChart, Legend, Line, LineChart, ReferenceArea, ReferenceLine, XAxis, YAxis } from 'recharts';
 import type { NamedItem, ResultsView, RunView } from '../../../src/results/view-model.js';
 import { lightAtEyeRows, recommendationBands, RECOMMENDED_DAY_MIN_LX, RECOMMENDED_EVENING_MAX_LX, RECOMMENDED_NIGHT_MAX_LX } from '../../../src/charts/light-at-eye-data.js';
 import { phaseByDayRows, phaseKey } from '../../../src/charts/phase-data.js';
-import { melatoninKey, melatoninNightRows } from '../../../src/charts/melatonin-data.js';
+import { melatoninKey, melatoninNightRows, nightAxis } from '../../../src/charts/melatonin-data.js';
 import { kssDayRows, KSS_SLEEPY_THRESHOLD } from '../../../src/charts/kss-grid-data.js';
 import { BAND_COLOURS, OKABE_ITO, SOURCE_KIND_COLOURS, seriesColour, seriesDash } from '../../../src/charts/palette.js';
 import { clockAxis, formatClock, formatDayLabel } from '../../../src/charts/clock.js';
+import { STEADY_CLOCK, type WallClock } from '../../../src/charts/wall-clock.js';
+import { formatLux, lightAxisTop_lx } from '../../../src/charts/light-scale.js';
 
 export const CHART_WIDTH_PX = 660;
 const AXIS_INK = '#4a5563';
@@ -16,24 +20,12 @@ const GRID = '#e3e6ea';
 const TICK = { fontSize: 10, fill: AXIS_INK };
 const LEGEND_STYLE = { fontSize: 10, lineHeight: '14px' };
 
-/**
- * Top of the light axis: brief outdoor peaks (thousands of lux) would flatten the indoor light and
- * the 250 lx line, so the axis stops at a round value above the 90th percentile of the day's
- * lit values (at least 400 lx); taller peaks are cut and their maximum is stated.
- */
-export function lightAxisTop_lx(totals: readonly number[]): { top: number; peak: number } {
-  const lit = totals.filter((v) => v > 0.5).sort((a, b) => a - b);
-  const peak = lit[lit.length - 1] ?? 0;
-  const p90 = lit[Math.floor(0.9 * (lit.length - 1))] ?? 0;
-  const want = Math.max(400, 1.25 * p90);
-  const step = want <= 1000 ? 100 : want <= 5000 ? 500 : 1000;
-  const top = Math.ceil(want / step) * step;
-  return { top: peak <= top ? Math.max(top, Math.ceil(peak / step) * step) : top, peak };
-}
+export { lightAxisTop_lx };
 
-export function PrintLightChart({ run, day, title, axisTop_lx }: { run: RunView; day: number; title: string; axisTop_lx?: number }) {
-  const rows = lightAtEyeRows(run.light, day, 10);
-  const bands = recommendationBands(run.sleep, day);
+export function PrintLightChart({ run, day, title, axisTop_lx, clock = STEADY_CLOCK }: { run: RunView; day: number; title: string; axisTop_lx?: number; clock?: WallClock }) {
+  const rows = lightAtEyeRows(run.light, day, 10, clock);
+  const bands = recommendationBands(run.sleep, day, clock);
+  const axis = clock.dayAxis(day);
   const auto = lightAxisTop_lx(rows.map((r) => r.total_lx));
   const top = axisTop_lx ?? auto.top;
   const cut = auto.peak > top;
@@ -45,7 +37,7 @@ export function PrintLightChart({ run, day, title, axisTop_lx }: { run: RunView;
         {bands.map((b, i) => (
           <ReferenceArea key={`a${i}`} x1={b.from_h} x2={b.to_h} fill={BAND_COLOURS[b.kind]} fillOpacity={b.kind === 'night' ? 0.07 : 0.06} ifOverflow="hidden" />
         ))}
-        <XAxis dataKey="clock_h" type="number" domain={[0, 24]} ticks={[0, 3, 6, 9, 12, 15, 18, 21, 24]} tick={TICK} tickFormatter={(h: number) => formatClock(h === 24 ? 0 : h)} />
+        <XAxis dataKey="x_h" type="number" domain={axis.domain} ticks={axis.ticks} tick={TICK} tickFormatter={axis.labelOf} />
         <YAxis tick={TICK} width={52} domain={[0, top]} allowDataOverflow label={{ value: 'melanopic EDI (lx)', angle: -90, position: 'insideLeft', style: { textAnchor: 'middle', fill: AXIS_INK, fontSize: 10 } }} />
         <Legend wrapperStyle={LEGEND_STYLE} iconSize={9} />
         {run.light.sources.map((s) => (
@@ -56,14 +48,15 @@ export function PrintLightChart({ run, day, title, axisTop_lx }: { run: RunView;
         ))}
       </ComposedChart>
       <p className="chart-note">
-        {cut ? `Peaks above ${top} lx are cut off (highest ${Math.round(auto.peak)} lx, usually outdoors). ` : ''}Shaded: day, evening (3 h before sleep) and night. Dashed lines: recommended melanopic EDI at the eye — at least {RECOMMENDED_DAY_MIN_LX} lx by day, at most {RECOMMENDED_EVENING_MAX_LX} lx in the evening, at most {RECOMMENDED_NIGHT_MAX_LX} lx during sleep (Brown et al. 2022).
+        {clock.changeNote(day) === null ? '' : `${clock.changeNote(day)}. `}
+        {cut ? `Peaks above ${top} lx are cut off (highest ${Math.round(auto.peak)} lx, usually outdoors). ` : ''}Shaded, by the person’s own sleep: awake, the last 3 h before sleep, and sleep. Dashed lines: recommended melanopic EDI at the eye (Brown et al. 2022) — at least {RECOMMENDED_DAY_MIN_LX} lx while awake in the day, at most {RECOMMENDED_EVENING_MAX_LX} lx in the 3 h before sleep, at most {RECOMMENDED_NIGHT_MAX_LX} lx during sleep; for a night worker the 3 h before sleep fall in the morning.
       </p>
     </figure>
   );
 }
 
-export function PrintPhaseChart({ view, runs, strategies }: { view: ResultsView; runs: readonly RunView[]; strategies: readonly NamedItem[] }) {
-  const rows = phaseByDayRows(runs, strategies, view.days, 'dlmo');
+export function PrintPhaseChart({ view, runs, strategies, clock = STEADY_CLOCK }: { view: ResultsView; runs: readonly RunView[]; strategies: readonly NamedItem[]; clock?: WallClock }) {
+  const rows = phaseByDayRows(runs, strategies, view.days, 'dlmo', clock);
   const axis = clockAxis(rows.flatMap((r) => strategies.map((s) => r[phaseKey(s.id, 'dlmo')])));
   const stride = view.days > 10 ? 2 : 1;
   return (
@@ -82,15 +75,16 @@ export function PrintPhaseChart({ view, runs, strategies }: { view: ResultsView;
   );
 }
 
-export function PrintMelatoninChart({ runs, strategies, day, dayLabel }: { runs: readonly RunView[]; strategies: readonly NamedItem[]; day: number; dayLabel: string }) {
-  const rows = melatoninNightRows(runs, strategies, day, 15);
+export function PrintMelatoninChart({ runs, strategies, day, dayLabel, clock = STEADY_CLOCK }: { runs: readonly RunView[]; strategies: readonly NamedItem[]; day: number; dayLabel: string; clock?: WallClock }) {
+  const rows = melatoninNightRows(runs, strategies, day, 15, clock);
+  const axis = nightAxis(day, clock);
   const unit = runs[0]?.melatonin.unit ?? '';
   return (
     <figure className="chart">
       <figcaption className="chart-title">Melatonin in the night after {dayLabel}</figcaption>
       <LineChart width={CHART_WIDTH_PX} height={190} data={rows} margin={{ top: 8, right: 16, bottom: 0, left: 4 }}>
         <CartesianGrid stroke={GRID} vertical={false} />
-        <XAxis dataKey="hour" type="number" domain={[18, 36]} ticks={[18, 21, 24, 27, 30, 33, 36]} tick={TICK} tickFormatter={(h: number) => formatClock(h)} />
+        <XAxis dataKey="x_h" type="number" domain={axis.domain} ticks={axis.ticks} tick={TICK} tickFormatter={axis.labelOf} />
         <YAxis tick={TICK} width={52} label={{ value: `melatonin (${unit})`, angle: -90, position: 'insideLeft', style: { textAnchor: 'middle', fill: AXIS_INK, fontSize: 10 } }} />
         <Legend wrapperStyle={LEGEND_STYLE} iconSize={9} />
         {strategies.map((s, i) => (
@@ -105,21 +99,23 @@ export function PrintMelatoninChart({ runs, strategies, day, dayLabel }: { runs:
   );
 }
 
-export function PrintKssChart({ runs, strategies, day, dayLabel }: { runs: readonly RunView[]; strategies: readonly NamedItem[]; day: number; dayLabel: string }) {
-  const rows = Array.from({ length: 24 }, (_, hour) => {
-    const row: Record<string, number | null> = { hour };
+export function PrintKssChart({ runs, strategies, day, dayLabel, clock = STEADY_CLOCK }: { runs: readonly RunView[]; strategies: readonly NamedItem[]; day: number; dayLabel: string; clock?: WallClock }) {
+  const byStrategy = new Map(strategies.map((s) => [s.id, runs.find((r) => r.strategyId === s.id)]));
+  const rows = Array.from({ length: Math.round(clock.dayLength_h(day)) }, (_, x_h) => {
+    const row: Record<string, number | null> = { x_h };
     for (const s of strategies) {
-      const run = runs.find((r) => r.strategyId === s.id);
-      row[s.id] = run === undefined ? null : (kssDayRows(run.kssHourly, day)[hour]?.kss ?? null);
+      const run = byStrategy.get(s.id);
+      row[s.id] = run === undefined ? null : (kssDayRows(run.kssHourly, day, clock)[x_h]?.kss ?? null);
     }
     return row;
   });
+  const axis = clock.dayAxis(day);
   return (
     <figure className="chart">
       <figcaption className="chart-title">Sleepiness (KSS) by hour on {dayLabel}</figcaption>
       <LineChart width={CHART_WIDTH_PX} height={170} data={rows} margin={{ top: 8, right: 40, bottom: 0, left: 4 }}>
         <CartesianGrid stroke={GRID} vertical={false} />
-        <XAxis dataKey="hour" type="number" domain={[0, 23]} ticks={[0, 3, 6, 9, 12, 15, 18, 21]} tick={TICK} tickFormatter={(h: number) => formatClock(h)} />
+        <XAxis dataKey="x_h" type="number" domain={axis.domain} ticks={axis.ticks} tick={TICK} tickFormatter={axis.labelOf} />
         <YAxis tick={TICK} width={52} domain={[1, 9]} ticks={[1, 3, 5, 7, 9]} label={{ value: 'KSS', angle: -90, position: 'insideLeft', style: { textAnchor: 'middle', fill: AXIS_INK, fontSize: 10 } }} />
         <ReferenceLine y={KSS_SLEEPY_THRESHOLD} stroke={OKABE_ITO.vermillion} strokeDasharray="6 3" label={{ value: 'KSS 7', position: 'right', fill: OKABE_ITO.vermillion, fontSize: 10 }} />
         <Legend wrapperStyle={LEGEND_STYLE} iconSize={9} />
@@ -157,17 +153,18 @@ export function PrintSuppressionChart({ view, strategies, nights }: { view: Resu
 }
 
 /** Total melanopic EDI of two strategies on one day on a log axis, so evening and night levels show. */
-export function PrintLightCompareChart({ runs, names, day, title }: { runs: readonly RunView[]; names: readonly string[]; day: number; title: string }) {
+export function PrintLightCompareChart({ runs, names, day, title, clock = STEADY_CLOCK }: { runs: readonly RunView[]; names: readonly string[]; day: number; title: string; clock?: WallClock }) {
   const FLOOR_LX = 0.1;
-  const series = runs.map((r) => lightAtEyeRows(r.light, day, 10));
+  const series = runs.map((r) => lightAtEyeRows(r.light, day, 10, clock));
+  const axis = clock.dayAxis(day);
   const rows = (series[0] ?? []).map((row, i) => {
-    const out: Record<string, number> = { clock_h: row.clock_h };
+    const out: Record<string, number> = { x_h: row.x_h };
     series.forEach((s, k) => {
       out[`s${k}`] = Math.max(FLOOR_LX, s[i]?.total_lx ?? 0);
     });
     return out;
   });
-  const bands = runs[0] === undefined ? [] : recommendationBands(runs[0].sleep, day);
+  const bands = runs[0] === undefined ? [] : recommendationBands(runs[0].sleep, day, clock);
   const peak = Math.max(10, ...rows.flatMap((r) => runs.map((_, k) => r[`s${k}`] ?? 0)));
   const top = 10 ** Math.ceil(Math.log10(peak));
   const ticks = [0.1, 1, 10, 100, 1000, 10000, 100000].filter((t) => t <= top);
@@ -179,8 +176,8 @@ export function PrintLightCompareChart({ runs, names, day, title }: { runs: read
         {bands.map((b, i) => (
           <ReferenceArea key={`a${i}`} x1={b.from_h} x2={b.to_h} fill={BAND_COLOURS[b.kind]} fillOpacity={b.kind === 'night' ? 0.07 : 0.06} ifOverflow="hidden" />
         ))}
-        <XAxis dataKey="clock_h" type="number" domain={[0, 24]} ticks={[0, 3, 6, 9, 12, 15, 18, 21, 24]} tick={TICK} tickFormatter={(h: number) => formatClock(h === 24 ? 0 : h)} />
-        <YAxis scale="log" domain={[FLOOR_LX, top]} ticks={ticks} allowDataOverflow tick={TICK} width={52} tickFormatter={(v: number) => (v >= 1000 ? `${v / 1000}k` : String(v))} label={{ value: 'melanopic EDI (lx, log)', angle: -90, position: 'insideLeft', style: { textAnchor: 'middle', fill: AXIS_INK, fontSize: 10 } }} />
+        <XAxis dataKey="x_h" type="number" domain={axis.domain} ticks={axis.ticks} tick={TICK} tickFormatter={axis.labelOf} />
+        <YAxis scale="log" domain={[FLOOR_LX, top]} ticks={ticks} allowDataOverflow tick={TICK} width={52} tickFormatter={formatLux} label={{ value: 'melanopic EDI (lx, log)', angle: -90, position: 'insideLeft', style: { textAnchor: 'middle', fill: AXIS_INK, fontSize: 10 } }} />
         <Legend wrapperStyle={LEGEND_STYLE} iconSize={9} />
         {bands.map((b, i) => (
           <ReferenceLine key={`l${i}`} segment={[{ x: b.from_h, y: b.limit_lx }, { x: b.to_h, y: b.limit_lx }]} stroke={BAND_COLOURS[b.kind]} strokeWidth={1.5} strokeDasharray={b.rule === 'at least' ? '6 3' : '2 3'} ifOverflow="hidden" />
