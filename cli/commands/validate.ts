@@ -100,7 +100,11 @@ export const validateCommand: Command = {
       lines.push('', HEALTH_CAUTION);
       ctx.stdout(lines.join('\n') + '\n');
     }
-    if (!valid) ctx.stderr(`zeitlight validate: ${file}: ${errors} error(s); the first is at ${problems.find((p) => p.severity === 'error')?.path || '(file)'}\n`);
+    if (!valid) {
+      const first = problems.find((p) => p.severity === 'error');
+      const where = first === undefined ? '(file)' : first.path !== '' ? first.path : (/\bline \d+(, column \d+)?/.exec(first.message)?.[0] ?? '(file)');
+      ctx.stderr(`zeitlight validate: ${file}: ${errors} error(s); the first is at ${where}\n`);
+    }
     return valid ? 0 : 1;
   },
 };

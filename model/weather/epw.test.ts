@@ -78,11 +78,21 @@ describe('EPW reader', () => {
     expect(errorOf(header().slice(0, 5).join('\n')).message).toMatch(/header/);
   });
 
-  it('refuses a data line with the wrong number of fields, naming the line', () => {
+  it('refuses a data line too short to hold the light fields, naming the line', () => {
     const rows = twoDays();
-    rows[4] = (rows[4] ?? '').split(',').slice(0, 30).join(',');
+    rows[4] = (rows[4] ?? '').split(',').slice(0, 19).join(',');
     const e = errorOf(fileText(rows));
-    expect(e.message).toMatch(/test\.epw, line 13: expected 35 comma-separated fields, found 30/);
+    expect(e.message).toMatch(/test\.epw, line 13: expected 35 comma-separated fields \(at least 20, through zenith luminance\), found 19/);
+  });
+
+  it('reads data lines that end early as missing trailing fields, and counts them in a warning', () => {
+    const rows = twoDays().map((r, i) => (i % 2 === 0 ? r.split(',').slice(0, 30).join(',') : `${r},,`));
+    const f = parseEpw(fileText(rows), 'test.epw');
+    expect(f.count).toBe(48);
+    expect(f.missingCounts.albedo).toBe(24);
+    expect(f.values.globalHorizontal_lx[12]).toBe(16000);
+    expect(f.warnings[0]).toEqual({ line: 9, message: '30 of 35 fields; fields 31–35 taken as missing' });
+    expect(f.warningCount).toBe(24);
   });
 
   it('refuses a non-numeric hour and an impossible date, naming the line', () => {

@@ -7,9 +7,12 @@
  *  - radiation is energy over that hour (Wh/m², numerically the mean W/m²), illuminance the mean
  *    over the hour (lx);
  *  - typical-year files mix source years and have 8760 rows; a file may also hold 29 February.
- * Structural faults (missing header, wrong column count, bad date or hour, gaps, truncation) are
- * errors naming the line; missing-value codes, non-numeric or impossible cells in a physical
- * field are counted warnings naming the line, and the value becomes NaN (missing).
+ * Structural faults (missing header, too few fields for the date and the light fields, bad date
+ * or hour, gaps, truncation) are errors naming the line; missing-value codes, non-numeric or
+ * impossible cells in a physical field are counted warnings naming the line, and the value
+ * becomes NaN (missing). Files from some sources end their data lines early (no albedo or
+ * precipitation fields) or add empty fields: the missing trailing fields are missing values and
+ * such lines are counted in a warning.
  */
 import { EPW_DATA_FIELD_COUNT, EPW_FIELDS, EPW_HEADER_LINES, type EpwNumericField } from './epw-fields.js';
 
@@ -67,6 +70,8 @@ export interface EpwFile {
 }
 
 const WARNING_DETAIL_LIMIT = 20;
+/** Fewest fields a data line may have: through zenith luminance (field 20), the last light field. */
+export const EPW_MIN_DATA_FIELDS = 20;
 const DAYS_IN_MONTH = [31, 29, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
 
 function splitCsvLine(line: string): string[] {
@@ -157,8 +162,14 @@ export function parseEpw(text: string, fileName = 'weather file'): EpwFile {
     const ln = EPW_HEADER_LINES + i + 1;
     const raw = lines[EPW_HEADER_LINES + i] ?? '';
     const cells = raw.split(',');
-    if (cells.length !== EPW_DATA_FIELD_COUNT) {
-      throw new EpwError(fileName, ln, `expected ${EPW_DATA_FIELD_COUNT} comma-separated fields, found ${cells.length}`);
+    if (cells.length < EPW_MIN_DATA_FIELDS) {
+      throw new EpwError(fileName, ln, `expected ${EPW_DATA_FIELD_COUNT} comma-separated fields (at least ${EPW_MIN_DATA_FIELDS}, through zenith luminance), found ${cells.length}`);
+    }
+    if (cells.length > EPW_DATA_FIELD_COUNT) {
+      if (cells.slice(EPW_DATA_FIELD_COUNT).some((c) => c.trim() !== '')) throw new EpwError(fileName, ln, `expected ${EPW_DATA_FIELD_COUNT} comma-separated fields, found ${cells.length}`);
+      cells.length = EPW_DATA_FIELD_COUNT;
+    } else if (cells.length < EPW_DATA_FIELD_COUNT) {
+      warn('short-line', { line: ln, message: `${cells.length} of ${EPW_DATA_FIELD_COUNT} fields; fields ${cells.length + 1}–${EPW_DATA_FIELD_COUNT} taken as missing` });
     }
     const int = (col: number, label: string, lo: number, hi: number) => {
       const v = numberCell(cells[col - 1]);

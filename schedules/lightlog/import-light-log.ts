@@ -162,8 +162,12 @@ export function importLightLog(text: string, options: LightLogOptions): LightLog
   const worn = new NumberColumn();
   const lineOf = new NumberColumn();
   let bad = 0;
+  let firstBadLine: number | undefined;
+  let firstBodyLine: number | undefined;
+  let lastBodyLine = 0;
   const rowProblem = (line: number, column: string | null, message: string, fix: string): void => {
     bad++;
+    firstBadLine ??= line;
     if (bad <= MAX_LISTED_ROW_PROBLEMS) problems.push({ severity: 'warning', line, column, message, fix });
   };
 
@@ -210,7 +214,8 @@ export function importLightLog(text: string, options: LightLogOptions): LightLog
     if (format === undefined) {
       const detected = detectTimestampFormat(pending.slice(0, FORMAT_SAMPLE_ROWS).map((r) => r.cells[c.tsCol] ?? ''));
       if (detected.format === undefined) {
-        fail(problems, `cannot tell the timestamp format: ${detected.note ?? ''}`, 'Set "timestampFormat" to iso, epoch-s, epoch-ms, ymd, dmy or mdy.', null, c.header[c.tsCol] ?? null);
+        const line = detected.at !== undefined ? (pending[detected.at]?.line ?? null) : null;
+        fail(problems, `cannot tell the timestamp format of column "${c.header[c.tsCol] ?? ''}": ${detected.note ?? ''}${line !== null ? ` (line ${line})` : ''}`, 'Set "timestampFormat" to iso, epoch-s, epoch-ms, ymd, dmy or mdy.', line, c.header[c.tsCol] ?? null);
         return false;
       }
       format = detected.format;
@@ -231,6 +236,8 @@ export function importLightLog(text: string, options: LightLogOptions): LightLog
       return true;
     }
     bodyRows++;
+    firstBodyLine ??= row.line;
+    lastBodyLine = row.line;
     if (cols === undefined) return false;
     if (read === undefined) {
       pending.push(row);
@@ -254,7 +261,8 @@ export function importLightLog(text: string, options: LightLogOptions): LightLog
   if (bad > MAX_LISTED_ROW_PROBLEMS) problems.push({ severity: 'warning', line: null, column: null, message: `${bad - MAX_LISTED_ROW_PROBLEMS} more unreadable line(s) not listed`, fix: 'Check the export settings of the logger software.' });
   const n = utc.length;
   if (n < 2 || bad > MAX_BAD_ROW_SHARE * bodyRows) {
-    return fail(problems, `only ${n} of ${bodyRows} lines hold a readable time and light value`, 'Check that this is a light-logger CSV and that the timestamp format and columns are right.');
+    const lines = firstBodyLine === lastBodyLine ? `line ${lastBodyLine}` : `lines ${firstBodyLine ?? 0}–${lastBodyLine}`;
+    return fail(problems, `only ${n} of ${bodyRows} lines (${lines}) hold a readable time and light value${firstBadLine !== undefined ? `; the first that does not is line ${firstBadLine}` : ''}`, 'Check that this is a light-logger CSV and that the timestamp format and columns are right.', firstBadLine ?? firstBodyLine ?? null);
   }
 
   // Order, duplicates: an index of readings by time (stable, so the first of equal times stays first).
@@ -298,7 +306,7 @@ export function importLightLog(text: string, options: LightLogOptions): LightLog
   }
   const lastT = utc.at(order[order.length - 1] ?? 0);
   if (notWorn !== undefined) gaps.push({ start_ms: notWorn.start_ms, end_ms: lastT + interval_ms, duration_min: (lastT + interval_ms - notWorn.start_ms) / 60_000, reason: 'not-worn', line: notWorn.line });
-  if (samples.length === 0) return fail(problems, 'the logger was never marked as worn', 'Check the worn column, or leave "wornColumn" out.');
+  if (samples.length === 0) return fail(problems, `column "${header[c.wornCol] ?? ''}" marks the logger as not worn on every line (lines ${firstBodyLine ?? 0}–${lastBodyLine})`, 'Check the worn column, or leave "wornColumn" out.', firstBodyLine ?? null, header[c.wornCol] ?? null);
   // Every gap is reported with its start, end and how the run fills it.
   for (const g of gaps) {
     problems.push({ severity: 'warning', line: g.line, column: null, message: describeGap(g, options.fill, options.timeZone), fix: 'Check the logger for that time, or choose another "fill" rule for the log (model, dark, hold or linear).' });

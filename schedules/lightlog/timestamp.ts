@@ -108,8 +108,10 @@ export function parseTimestamp(text: string, format: Exclude<TimestampFormat, 'a
 
 export interface DetectedFormat {
   readonly format: Exclude<TimestampFormat, 'auto'> | undefined;
-  /** Set when the guess could be wrong (e.g. all days ≤ 12). */
+  /** Set when the guess could be wrong (e.g. all days ≤ 12), or says why there is none. */
   readonly note: string | undefined;
+  /** Index (in the samples given) of the text the note is about, when there is one. */
+  readonly at?: number;
 }
 
 const EPOCH = /^\d+(\.\d+)?$/;
@@ -122,15 +124,17 @@ const ISO = /^\d{4}-\d{2}-\d{2}([T ]\d{2}:\d{2}(:\d{2}([.,]\d+)?)?)?\s*(Z|[+-]\d
  * an explicit format).
  */
 export function detectTimestampFormat(samples: readonly string[]): DetectedFormat {
-  const texts = samples.map((s) => s.trim()).filter((s) => s !== '');
+  const trimmed = samples.map((s) => s.trim());
+  const texts = trimmed.filter((s) => s !== '');
   if (texts.length === 0) return { format: undefined, note: 'no timestamps to look at' };
   const epoch = texts.filter((t) => EPOCH.test(t));
   const iso = texts.filter((t) => ISO.test(t));
   const parts = texts.map(splitDateTime).filter((p): p is Parts => p !== undefined);
   const best = Math.max(epoch.length, iso.length, parts.length);
   if (2 * best <= texts.length) {
-    const unknown = texts.find((t) => !EPOCH.test(t) && !ISO.test(t) && splitDateTime(t) === undefined);
-    return { format: undefined, note: unknown !== undefined ? `"${unknown.slice(0, 40)}" is not a date-time form we know` : 'the timestamps are written in several different forms' };
+    const at = trimmed.findIndex((t) => t !== '' && !EPOCH.test(t) && !ISO.test(t) && splitDateTime(t) === undefined);
+    const unknown = trimmed[at];
+    return unknown !== undefined ? { format: undefined, note: `"${unknown.slice(0, 40)}" is not a date-time form we know`, at } : { format: undefined, note: 'the timestamps are written in several different forms', at: 0 };
   }
   if (epoch.length === best) return { format: Number(epoch[0]) > 1e11 ? 'epoch-ms' : 'epoch-s', note: undefined };
   if (iso.length === best) return { format: 'iso', note: undefined };
@@ -140,5 +144,8 @@ export function detectTimestampFormat(samples: readonly string[]): DetectedForma
   if (firstOver12 && !secondOver12) return { format: 'dmy', note: undefined };
   if (secondOver12 && !firstOver12) return { format: 'mdy', note: undefined };
   if (!firstOver12 && !secondOver12) return { format: 'dmy', note: 'every day number is 12 or less, so day-first was assumed' };
-  return { format: undefined, note: 'the dates mix day-first and month-first forms' };
+  const all = trimmed.map(splitDateTime);
+  const dayFirst = all.findIndex((p) => p !== undefined && p.a > 12);
+  const monthFirst = all.findIndex((p) => p !== undefined && p.b > 12);
+  return { format: undefined, note: 'the dates mix day-first and month-first forms', at: Math.max(dayFirst, monthFirst) };
 }

@@ -14,6 +14,7 @@ import { lightLogSpecSchema } from '../schema/light-log-schema.js';
 import type { Scenario } from '../schema/scenario-types.js';
 import { formatPath, problem, type ScenarioProblem } from './problem.js';
 import { repairForChecks } from './repair-for-checks.js';
+import { jsonErrorOffset, positionAt } from './json-error-position.js';
 import { schemaProblems } from './zod-problems.js';
 import { referenceChecks, type SetAsideIds } from './sense/reference-checks.js';
 import { siteChecks } from './sense/site-checks.js';
@@ -248,24 +249,31 @@ export function validateScenarioValue(input: unknown): ScenarioValidation {
 
 /** Validates the text of a scenario file; JSON syntax errors are reported with line and column. */
 export function validateScenarioText(text: string): ScenarioValidation {
+  const body = text.replace(/^\uFEFF/, '');
   let value: unknown;
   try {
-    value = JSON.parse(text);
+    value = JSON.parse(body);
   } catch (err) {
-    const msg = err instanceof Error ? err.message : String(err);
-    const pos = /position (\d+)/.exec(msg);
-    let where = '';
-    if (pos !== null) {
-      const offset = Number(pos[1]);
-      const before = text.slice(0, offset);
-      const line = before.split('\n').length;
-      const column = offset - before.lastIndexOf('\n');
-      where = ` at line ${line}, column ${column}`;
-    }
+    const msg = (err instanceof Error ? err.message : String(err)).replace(/\s+/g, ' ').slice(0, 160);
+    const stated = /position (\d+)/.exec(msg);
+    const offset = jsonErrorOffset(body) ?? (stated !== null ? Number(stated[1]) : body.length);
+    const at = positionAt(body, offset);
+    const what = body.trim() === '' ? 'the file is empty' : `the file is not valid JSON at line ${at.line}, column ${at.column}: ${msg}`;
     return {
       ok: false,
       scenario: undefined,
-      problems: [problem('error', '', `the file is not valid JSON${where}: ${msg}`, 'Fix the JSON syntax there (a missing comma, quote or bracket is the usual cause).')],
+      problems: [problem('error', '', body.trim() === '' ? `${what} (line 1)` : what, body.trim() === '' ? 'Start from the demo scenario (zeitlight demo writes one).' : 'Fix the JSON syntax there (a missing comma, quote or bracket is the usual cause).')],
+      migratedFrom: undefined,
+      migrations: [],
+    };
+  }
+  if (value === null || typeof value !== 'object' || Array.isArray(value)) {
+    const at = positionAt(body, body.length - body.trimStart().length);
+    const holds = Array.isArray(value) ? 'a list [ … ]' : value === null ? 'null' : typeof value === 'string' ? 'a text' : `a ${typeof value}`;
+    return {
+      ok: false,
+      scenario: undefined,
+      problems: [problem('error', '', `the file must hold one JSON object { … }, but at line ${at.line} it holds ${holds}`, 'A scenario is one JSON object { … }; start from the demo scenario (zeitlight demo writes one).')],
       migratedFrom: undefined,
       migrations: [],
     };

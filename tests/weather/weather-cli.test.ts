@@ -53,15 +53,15 @@ describe('zeitlight weather', () => {
     expect(r.stderr).toMatch(/cut\.epw, line 1000: .*truncated/);
   });
 
-  it('names the file and line of a row with a wrong column count', async () => {
+  it('names the file and line of a row too short to hold the light fields', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'zeitlight-weather-'));
     const path = join(dir, 'bad.epw');
     const lines = amsterdamEpwText().split('\n');
-    lines[20] = (lines[20] ?? '').split(',').slice(0, 20).join(',');
+    lines[20] = (lines[20] ?? '').split(',').slice(0, 18).join(',');
     writeFileSync(path, lines.join('\n'));
     const r = await run(['weather', path, '--json']);
     expect(r.status).toBe(1);
-    expect(r.stderr).toMatch(/bad\.epw, line 21: expected 35 comma-separated fields, found 20/);
+    expect(r.stderr).toMatch(/bad\.epw, line 21: expected 35 comma-separated fields \(at least 20, through zenith luminance\), found 18/);
   });
 
   it('reports counted warnings naming lines for impossible values and keeps going', async () => {
