@@ -8,6 +8,7 @@ import { weatherCommand } from './commands/weather.js';
 import { runCommand } from './commands/run.js';
 import { validateCommand } from './commands/validate.js';
 import { demoCommand } from './commands/demo.js';
+import { photometryCommand } from './commands/photometry.js';
 
 /** Every `zeitlight` command, in the order `zeitlight help` lists them. */
 export const COMMANDS: readonly Command[] = [
@@ -15,6 +16,7 @@ export const COMMANDS: readonly Command[] = [
   runCommand,
   validateCommand,
   alphaopicCommand,
+  photometryCommand,
   sourcesCommand,
   sunCommand,
   weatherCommand,
