@@ -1,12 +1,17 @@
-// End-to-end checks of the workspace in web mode, in Chromium: open the demo scenario, edit a
-// persona's routine and a strategy, undo, read the results views, export CSV. Screenshots of
-// each main view go to tests/artifacts/.
+// End-to-end checks of the workspace in web mode, in Chromium: open the demo scenario on its
+// summary, edit a persona's routine and a strategy, undo, read the results views, export CSV and
+// charts, cohort bands, the start page's message for a broken file. Screenshots of each main view
+// go to tests/artifacts/.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { readFile } from 'node:fs/promises';
+import { copyFile, mkdtemp, readFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
 import Papa from 'papaparse';
 import * as path from 'node:path';
 import type { Page } from 'playwright-core';
 import { ARTIFACTS, chromiumAvailable, screenshot, startSession, type Session } from './browser.js';
+import type { CommandContext } from '../../cli/command.js';
+import { demoCommand } from '../../cli/commands/demo.js';
+import type { RunResults } from '../../schedules/run/index.js';
 
 const available = chromiumAvailable();
 
@@ -50,6 +55,22 @@ async function waitForNewResults(page: Page, before: number, what: string): Prom
   await waitUntil(() => page.locator('.run-state').innerText(), (t) => t === 'Results up to date', 20_000, `results were not marked up to date after ${what}`);
 }
 
+/** `zeitlight demo` run in this process as tests/run does (default models, no PDF); its results.json. */
+async function cliDemoResults(): Promise<RunResults> {
+  const out = path.join(await mkdtemp(path.join(tmpdir(), 'zeitlight-e2e-demo-')), 'out');
+  const printed: string[] = [];
+  const ctx: CommandContext = { positionals: [], values: { out, 'no-ensemble': true, 'no-pdf': true }, json: false, stdout: (t) => printed.push(t), stderr: () => undefined };
+  const code = await demoCommand.run(ctx);
+  if (code !== 0) throw new Error(`zeitlight demo exited with ${code}: ${printed.join('')}`);
+  return JSON.parse(await readFile(path.join(out, 'results.json'), 'utf8')) as RunResults;
+}
+
+/** Hours of a local "HH:MM". */
+const clockHours = (text: string | undefined) => {
+  const m = /^(\d{2}):(\d{2})$/.exec(text ?? '');
+  return m === null ? Number.NaN : Number(m[1]) + Number(m[2]) / 60;
+};
+
 describe.skipIf(!available)('workspace in the browser', () => {
   let s: Session;
 
@@ -63,8 +84,10 @@ describe.skipIf(!available)('workspace in the browser', () => {
 
   const tuesdaySegments = () => s.page.locator('button.segment[aria-label^="Tuesday "]');
 
-  it('opens the demo scenario from the URL and shows its people', async () => {
+  it('opens the demo scenario from the URL on its summary, with the People editor one click away', async () => {
     await s.page.goto(`${s.url}?open=demo`);
+    await s.page.getByRole('heading', { name: 'Summary', level: 2 }).waitFor();
+    await s.page.getByRole('button', { name: 'People', exact: true }).click();
     await s.page.getByRole('heading', { name: 'People' }).waitFor();
     await expect(s.page.getByRole('tab', { name: /Mara Quellbrook/ }).isVisible()).resolves.toBe(true);
     await s.page.getByRole('tab', { name: /Tove Arnhelm/ }).click();
@@ -112,12 +135,14 @@ describe.skipIf(!available)('workspace in the browser', () => {
     await s.page.getByRole('button', { name: 'Strategies', exact: true }).click();
     const card = s.page.getByRole('article', { name: 'Tunable white: brighter day, warmer afternoon' });
     await card.waitFor();
-    const lux = card.getByLabel('Illuminance at the eye');
+    // the strategy changes the panels of the floor seen from each desk; the first is the window desk's
+    const lux = card.getByLabel('Illuminance at the eye').first();
     await lux.fill('900');
     await poll(() => card.locator('.change-list').innerText()).toContain('900 lx at the eye');
     await screenshot(s.page, 'strategies');
     await s.page.getByRole('button', { name: 'Undo' }).click();
-    await poll(() => card.locator('.change-list').innerText()).toContain('450 lx at the eye');
+    await poll(() => card.locator('.change-list').innerText()).not.toContain('900 lx at the eye');
+    await expect(lux.inputValue()).resolves.toBe('450');
   });
 
   it('shows the site and places editors', async () => {
@@ -233,7 +258,8 @@ describe.skipIf(!available)('workspace in the browser', () => {
 
     await s.page.getByRole('button', { name: 'Strategies', exact: true }).click();
     const runsBeforeEdit = await finishedRuns(s.page);
-    await s.page.getByRole('article', { name: 'Tunable white: brighter day, warmer afternoon' }).getByLabel('Illuminance at the eye').fill('1500');
+    // the desk worker's floor (by the windows) is the strategy's first change
+    await s.page.getByRole('article', { name: 'Tunable white: brighter day, warmer afternoon' }).getByLabel('Illuminance at the eye').first().fill('1500');
     await waitForNewResults(s.page, runsBeforeEdit, 'the edit to 1 500 lx');
     await s.page.getByRole('button', { name: 'Compare', exact: true }).click();
     await s.page.getByRole('combobox', { name: 'Person' }).selectOption('desk-worker');
@@ -255,9 +281,26 @@ describe.skipIf(!available)('workspace in the browser', () => {
     await s.page.goto(s.url);
     await s.page.getByRole('button', { name: 'New scenario' }).click();
     await s.page.getByRole('heading', { name: 'People' }).waitFor();
-    await poll(() => s.page.locator('.run-state').innerText(), { timeout: 20_000 }).toMatch(/not connected|up to date/);
+    await poll(() => s.page.locator('.run-state').innerText(), { timeout: 20_000 }).toMatch(/Needs a run|up to date/);
     await expect(s.page.locator('details.problems-error').count()).resolves.toBe(0);
     await poll(() => s.page.title()).toMatch(/^• Untitled/);
+  });
+
+  it('shows on the start page why a broken scenario file cannot be opened, with its line and column', async () => {
+    await s.page.goto(s.url);
+    const broken = '{\n  "format": "zeitlight-scenario",\n  "version": 1\n  "name": "missing comma"\n}\n';
+    const [chooser] = await Promise.all([s.page.waitForEvent('filechooser'), s.page.getByRole('button', { name: 'Open a scenario file…' }).click()]);
+    await chooser.setFiles({ name: 'broken.zeitlight', mimeType: 'application/json', buffer: Buffer.from(broken) });
+    // The message stays on the start page until the next attempt; the activity log keeps the notice.
+    const alert = s.page.getByRole('alert');
+    await alert.waitFor({ timeout: 20_000 });
+    const text = await alert.innerText();
+    expect(text).toContain('broken.zeitlight');
+    expect(text).toMatch(/line 4 column 3/);
+    const notices = (await activity(s.page)).filter((e) => e.kind === 'notice' && e.detail.tone === 'error');
+    expect(notices.map((e) => String(e.detail.text))).toContainEqual(expect.stringContaining('broken.zeitlight'));
+    await expect(s.page.getByRole('button', { name: 'Open the demo scenario' }).isVisible()).resolves.toBe(true);
+    await screenshot(s.page, 'start-broken-file');
   });
 
   it('reports no script or Content-Security-Policy errors', () => {
@@ -271,13 +314,32 @@ describe.skipIf(!available)('results views of the demo run', () => {
   beforeAll(async () => {
     s = await startSession();
     await s.page.goto(`${s.url}?open=demo`);
-    await s.page.getByRole('heading', { name: 'People' }).waitFor();
+    await s.page.getByRole('heading', { name: 'Summary', level: 2 }).waitFor();
     await waitForNewResults(s.page, 0, 'opening the demo');
   }, 3 * RESULTS_TIMEOUT_MS);
 
   afterAll(async () => {
     await s?.close();
   });
+
+  it('lands on the summary: each person’s recommendation, its plain sentences and the headline figures of zeitlight run’s results.json', async () => {
+    await expect(s.page.locator('.nav-item[aria-current="page"]').innerText()).resolves.toBe('Summary');
+    const results = await cliDemoResults();
+    for (const persona of results.personas) {
+      const card = s.page.locator(`article[data-persona="${persona.id}"]`);
+      await expect(card.locator('.summary-recommendation').getAttribute('data-strategy')).resolves.toBe(persona.recommendation.strategy_id);
+      const sentences = await card.locator('.summary-sentences li').allInnerTexts();
+      const recommended = persona.strategies.find((st) => st.id === persona.recommendation.strategy_id);
+      expect(sentences).toEqual(recommended?.headlines.map((h) => h.sentence));
+      for (const strategy of persona.strategies) {
+        for (const h of strategy.headlines) {
+          const shown = await card.locator(`td[data-strategy="${strategy.id}"][data-headline="${h.metric}"]`).getAttribute('data-value');
+          expect({ persona: persona.id, strategy: strategy.id, metric: h.metric, value: shown === '' || shown === null ? null : Number(shown) }).toEqual({ persona: persona.id, strategy: strategy.id, metric: h.metric, value: h.value });
+        }
+      }
+    }
+    await screenshot(s.page, 'results-summary');
+  }, 2 * RESULTS_TIMEOUT_MS);
 
   it.each([
     ['Light at the eye', 'results-light-at-eye'],
@@ -292,8 +354,51 @@ describe.skipIf(!available)('results views of the demo run', () => {
     await expect(s.page.getByText('not a simulation result').count()).resolves.toBe(0);
     await expect(s.page.getByRole('complementary', { name: 'Cautions' }).isVisible()).resolves.toBe(true);
     await s.page.getByRole('combobox', { name: 'Person' }).selectOption('desk-worker');
-    if (label !== 'Sleep' && label !== 'Compare') await s.page.locator('.recharts-surface').first().waitFor();
+    if (label === 'Sleep') await s.page.locator('svg.sleep-chart .sleep-bar').first().waitFor();
+    else if (label !== 'Compare') await s.page.locator('.recharts-surface').first().waitFor();
     await screenshot(s.page, file);
+  });
+
+  it('draws the day the clocks go forward as 23 hours with local-time ticks, and remembers the light scale', async () => {
+    await s.page.getByRole('button', { name: 'Light at the eye', exact: true }).click();
+    await s.page.getByRole('combobox', { name: 'Person' }).selectOption('nurse');
+    // Day 6 of the demo is Sunday 29 March 2026, the start of summer time in Europe/Berlin.
+    await s.page.locator('.day-picker input[type="range"]').fill('6');
+    await expect(s.page.locator('.day-picker output').innerText()).resolves.toBe('Sun 29 Mar · 23 h');
+    await expect(s.page.locator('.clock-note').innerText()).resolves.toContain('23-hour day: clocks went forward one hour at 02:00');
+    // The axis ticks are laid out after the chart's first drawing; the finished axis stays. The
+    // time axis's ticks are the clock times among the chart's tick labels (the light axis's are lux).
+    const ticks = async () => (await s.page.locator('.recharts-cartesian-axis-tick-value').allTextContents()).filter((t) => /^\d{2}:\d{2}$/.test(t));
+    await poll(ticks, { message: 'the time axis never showed the 23-hour day' }).toEqual(['00:00', '03:00', '06:00', '09:00', '12:00', '15:00', '18:00', '21:00', '24:00']);
+    await s.page.getByRole('radio', { name: 'Total, log axis' }).click();
+    await screenshot(s.page, 'results-light-at-eye-clock-change');
+    await s.page.reload();
+    await waitForNewResults(s.page, 0, 'reloading the demo');
+    await s.page.getByRole('button', { name: 'Light at the eye', exact: true }).click();
+    await expect(s.page.getByRole('radio', { name: 'Total, log axis' }).getAttribute('aria-checked')).resolves.toBe('true');
+    await s.page.getByRole('radio', { name: 'By source, capped axis' }).click();
+  }, 2 * RESULTS_TIMEOUT_MS);
+
+  it('exports a chart as PNG and as SVG', async () => {
+    await s.page.getByRole('button', { name: 'Light at the eye', exact: true }).click();
+    await s.page.locator('.recharts-surface').first().waitFor();
+    const figure = s.page.getByRole('figure', { name: /^Melanopic EDI at the eye/ });
+    const [png] = await Promise.all([s.page.waitForEvent('download'), figure.getByRole('button', { name: /as PNG$/ }).click()]);
+    expect(png.suggestedFilename()).toMatch(/^melanopic-edi-at-the-eye-.*\.png$/);
+    const pngBytes = await readFile(await png.path());
+    // PNG signature and IHDR size (ISO/IEC 15948, §5.2 and §11.2.2)
+    expect([...pngBytes.subarray(0, 8)]).toEqual([137, 80, 78, 71, 13, 10, 26, 10]);
+    expect(pngBytes.readUInt32BE(16)).toBeGreaterThan(600);
+    expect(pngBytes.readUInt32BE(20)).toBeGreaterThan(300);
+    await copyFile(await png.path(), path.join(ARTIFACTS, 'chart-export.png'));
+    const [svg] = await Promise.all([s.page.waitForEvent('download'), figure.getByRole('button', { name: /as SVG$/ }).click()]);
+    expect(svg.suggestedFilename()).toMatch(/^melanopic-edi-at-the-eye-.*\.svg$/);
+    const svgText = await readFile(await svg.path(), 'utf8');
+    expect(svgText.startsWith('<?xml')).toBe(true);
+    expect(svgText).toContain('<svg xmlns="http://www.w3.org/2000/svg"');
+    expect(svgText).toContain('recharts-area');
+    expect(svgText).toContain('Daylight through windows');
+    await copyFile(await svg.path(), path.join(ARTIFACTS, 'chart-export.svg'));
   });
 
   it('exports the comparison as CSV with differences versus baseline', async () => {
@@ -308,7 +413,9 @@ describe.skipIf(!available)('results views of the demo run', () => {
     expect(dlmo.length).toBeGreaterThan(2);
     const tunable = dlmo.find((r) => r[3] === 'Tunable white: brighter day, warmer afternoon');
     const baselineRow = dlmo.find((r) => r[3] === 'Baseline' && r[0] === tunable?.[0]);
-    expect(Number(tunable?.[5])).toBeCloseTo(Number(tunable?.[4]) - Number(baselineRow?.[4]), 1);
+    // clock times as local HH:MM, their difference in decimal hours
+    expect(tunable?.[2]).toBe('local time (difference in h)');
+    expect(Number(tunable?.[5])).toBeCloseTo(clockHours(tunable?.[4]) - clockHours(baselineRow?.[4]), 1);
     expect(tunable?.[6]).toMatch(/than baseline|no change/);
   });
 
@@ -380,6 +487,20 @@ describe.skipIf(!available)('results views of the demo run', () => {
     await s.page.setViewportSize({ width: 1440, height: 1500 });
     await s.page.locator('.cohort-charts').screenshot({ path: path.join(ARTIFACTS, 'cohort-range-charts.png') });
     await s.page.setViewportSize({ width: 1440, height: 900 });
+
+    // The finished cohort draws its 5–95 % and interquartile bands on the day-by-day charts.
+    for (const [label, file] of [
+      ['Body clock', 'results-body-clock-cohort'],
+      ['Melatonin', 'results-melatonin-cohort'],
+    ] as const) {
+      await s.page.getByRole('button', { name: label, exact: true }).click();
+      await s.page.getByRole('combobox', { name: 'Person' }).selectOption('desk-worker');
+      await s.page.locator('.recharts-surface').first().waitFor();
+      await expect(s.page.locator('.cohort-band-outer .recharts-area-area').count()).resolves.toBeGreaterThan(0);
+      await expect(s.page.locator('.cohort-band-inner .recharts-area-area').count()).resolves.toBeGreaterThan(0);
+      await expect(s.page.getByRole('figure').first().innerText()).resolves.toContain('12 virtual occupants');
+      await screenshot(s.page, file);
+    }
 
     const [popup] = await Promise.all([s.page.waitForEvent('popup', { timeout: 30_000 }), s.page.getByRole('button', { name: 'Briefing PDF' }).click()]);
     await popup.waitForFunction(() => (globalThis as { __zeitlightPrint?: { status: string } }).__zeitlightPrint?.status === 'ready', null, { timeout: 60_000 });

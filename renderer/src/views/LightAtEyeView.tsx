@@ -14,7 +14,8 @@ import { niceTicks } from '../charts/nice-ticks.js';
 import { ChartFigure } from './ChartFigure.js';
 import { useRememberedChoice } from './remembered-choice.js';
 
-const BAND_TEXT = { day: 'Day: ≥ 250 lx', evening: 'Evening: ≤ 10 lx', night: 'Night: ≤ 1 lx' } as const;
+/** Bands named by the person's own sleep (a night worker's "3 h before sleep" falls in the morning). */
+const BAND_TEXT = { day: 'Awake: ≥ 250 lx', evening: 'Last 3 h before sleep: ≤ 10 lx', night: 'Asleep: ≤ 1 lx' } as const;
 const SCALES: readonly LightScale[] = ['capped', 'log'];
 const AXIS_INK = '#4a5563';
 
@@ -64,7 +65,7 @@ export function LightAtEyeView({ view, personaId, day }: { view: ResultsView; pe
         caption={
           <>
             {cut && peakRow !== undefined && `Peaks above ${formatLux(linear.domain[1])} lx are cut (highest ${formatLux(capped.peak)} lx at ${formatClock(peakRow.clock_h)}); the log axis shows them whole. `}
-            Dashed lines: recommended melanopic EDI at the eye — at least 250 lx by day, at most 10 lx in the 3 h before sleep, at most 1 lx during sleep (Brown et al. 2022, PLOS Biology 20:e3001571). Local clock time.
+            Dashed lines: recommended melanopic EDI at the eye — at least 250 lx while awake, at most 10 lx in the 3 h before sleep, at most 1 lx during sleep (Brown et al. 2022, PLOS Biology 20:e3001571). Local clock time.
           </>
         }
       >

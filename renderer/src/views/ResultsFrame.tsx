@@ -5,6 +5,7 @@ import type { ResultsState } from '../state/workspace-store.js';
 import { RESULTS_CAUTIONS } from '../results/cautions.js';
 import { RUN_CAUTION } from '../../../schedules/run/index.js';
 import { formatDayLabel } from '../charts/clock.js';
+import { wallClockOf } from '../charts/wall-clock.js';
 
 export interface ResultsSelection {
   readonly personaId: string;
@@ -45,6 +46,13 @@ export function RunNotes({ view }: { view: ResultsView }) {
       </ul>
     </aside>
   );
+}
+
+/** The picked day, with its length when the clocks change that day ("Sun 29 Mar · 23 h"). */
+function dayPickerLabel(view: ResultsView, day: number): string {
+  const clock = wallClockOf(view);
+  const length = Math.round(clock.dayLength_h(day) * 100) / 100;
+  return `${formatDayLabel(view.startDate, day)}${clock.changesIn(day).length > 0 ? ` · ${length} h` : ''}`;
 }
 
 export function ResultsFrame({
@@ -100,7 +108,7 @@ export function ResultsFrame({
             <label className="day-picker">
               Day
               <input type="range" min={0} max={view.days - 1} value={Math.min(selection.day, view.days - 1)} onChange={(e) => onSelect({ ...selection, day: Number(e.target.value) })} />
-              <output>{formatDayLabel(view.startDate, Math.min(selection.day, view.days - 1))}</output>
+              <output>{dayPickerLabel(view, Math.min(selection.day, view.days - 1))}</output>
             </label>
           )}
         </div>
