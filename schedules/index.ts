@@ -15,7 +15,8 @@ export { formatPath, formatProblem, type ScenarioProblem, type ProblemSeverity }
 export { migrateScenario, MIGRATIONS, type MigrationResult } from './migration/migrate.js';
 
 export { expandScenario, expandPersona, parseDateTimeAtSite } from './timeline/expand-scenario.js';
-export { applyStrategyToPlaces, describeChange, describeStrategy } from './timeline/apply-strategy.js';
+export { applyStrategyToPlaces } from './timeline/apply-strategy.js';
+export { changeWords, strategyChangeWords } from './words/strategy-changes.js';
 export { rosterDay, type RosterDay } from './timeline/roster-plan.js';
 export { sliceAtMinute, sliceIndexPerMinute, dayAtMinute, utcAtMinute, wallClockAtMinute, forEachMinute } from './timeline/timeline-sampling.js';
 export {

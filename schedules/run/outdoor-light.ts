@@ -5,7 +5,7 @@
  * the vertical illuminance at the eye of a person outdoors (Perez sky, gaze averaged over all
  * horizontal directions, model/daylight/outdoor-eye.ts) with the ground reflectance of the site.
  */
-import { daylightFromEpw, daylightFromSkyConditions, groundReflectanceWithSnow, outdoorEyeIlluminance, parseEpw, type DaylightSeries, type SkyCondition } from '../../model/daylight/index.js';
+import { daylightFromEpw, daylightFromSkyConditions, groundReflectanceWithSnow, outdoorEyeIlluminance, parseEpw, type DaylightSeries, type EpwLocation, type SkyCondition } from '../../model/daylight/index.js';
 import { outdoorConditionsFromDaylightSeries, type OutdoorConditions } from '../../model/eye/index.js';
 import type { Scenario } from '../schema/scenario-types.js';
 import { utcOffsetAt_min } from '../time/local-calendar.js';
@@ -24,6 +24,8 @@ export interface OutdoorLight {
   readonly skyByDay: readonly (SkyCondition | null)[];
   /** Weather-file hours filled from a neighbour. */
   readonly filledHours: number;
+  /** The place a weather file was recorded for (its header); null for generated skies. */
+  readonly weatherLocation: EpwLocation | null;
 }
 
 export interface WeatherText {
@@ -105,10 +107,13 @@ function computeDaylight(scenario: Scenario, timeline: ExposureTimeline, weather
   let series: DaylightSeries;
   let skyByDay: (SkyCondition | null)[];
   let filledHours = 0;
+  let weatherLocation: EpwLocation | null = null;
   if (site.weather.kind === 'file') {
     if (weather === undefined) throw new RunInputError('site.weather.file', `the weather file ${site.weather.file} was not supplied`);
     try {
-      const r = daylightFromEpw(parseEpw(weather.text, weather.fileName), window);
+      const file = parseEpw(weather.text, weather.fileName);
+      weatherLocation = file.location;
+      const r = daylightFromEpw(file, window);
       series = r.series;
       filledHours = r.filledHours;
     } catch (err) {
@@ -137,5 +142,5 @@ function computeDaylight(scenario: Scenario, timeline: ExposureTimeline, weather
   // Snow cover from the month list when the weather has no snow depth.
   const snowOnGround = conditions.snowOnGround ?? new Uint8Array(timeline.total_min);
   if (site.weather.kind === 'sky-model' || !site.weather.snowFromFile) for (let i = 0; i < month.length; i++) snowOnGround[i] = snowMonths.has(month[i] as number) ? 1 : 0;
-  return { base: { key, series, conditions: { ...conditions, snowOnGround }, skyByDay, filledHours }, eye_lx: new Float64Array(timeline.total_min).fill(Number.NaN), month };
+  return { base: { key, series, conditions: { ...conditions, snowOnGround }, skyByDay, filledHours, weatherLocation }, eye_lx: new Float64Array(timeline.total_min).fill(Number.NaN), month };
 }

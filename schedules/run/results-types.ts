@@ -6,6 +6,7 @@
  */
 import type { CohortSummary } from '../../model/cohort/aggregate-cohort.js';
 import type { AlignmentSummary } from './alignment.js';
+import type { RunBasis } from './run-basis.js';
 import type { UtcOffsetSpan } from './local-clock.js';
 
 export const RESULTS_FORMAT = 'zeitlight-results';
@@ -212,6 +213,8 @@ export interface RunResults {
   readonly local_clock?: { readonly utc_offsets: readonly UtcOffsetSpan[] };
   readonly personas: readonly PersonaResult[];
   readonly warnings: readonly string[];
+  /** What the run rests on: the weather source (and whether a weather file is near the site) and the measured-light days and filled gaps per person (run-basis.ts). Absent in results written before it existed. */
+  readonly basis?: RunBasis;
   /** Present when a cohort was run (`zeitlight run --cohort n --seed s`). */
   readonly cohort?: CohortResults;
   /** Present when the model ensemble was run (the default of `zeitlight run`; off with --no-ensemble). */

@@ -9,6 +9,7 @@ import type { PacemakerId } from '../../model/circadian/registry.js';
 import { DEFAULT_PACEMAKER_ID } from '../../model/circadian/registry.js';
 import { DLMO_DEFINITION, SUPPRESSION_DEFINITION } from '../../model/circadian/melatonin-nights.js';
 import { HEADLINE_SLEEPINESS_ID, SLEEPINESS_MODELS } from '../../model/circadian/sleepiness-registry.js';
+import { MELATONIN_MODEL, melatoninCitation } from '../../model/circadian/model-citations.js';
 import { importLightLog } from '../lightlog/import-light-log.js';
 import { logToMinuteSeries, type MinuteLightSeries } from '../lightlog/log-to-minutes.js';
 import type { Persona, Scenario } from '../schema/scenario-types.js';
@@ -25,6 +26,7 @@ import { headlines, recommend } from './recommend.js';
 import { RESULTS_FORMAT, RESULTS_FORMAT_VERSION, type PersonaResult, type RunResults, type StrategyResult } from './results-types.js';
 import type { NightBlinds } from './room-scene.js';
 import { RunInputError } from './run-input-error.js';
+import { measuredLightUses, weatherBasis, weatherSiteWarning, type LogInRun } from './run-basis.js';
 
 export const PIPELINE_VERSION = '1.0.0';
 
@@ -79,7 +81,7 @@ function nightBlinds(scenario: Scenario, timeline: ExposureTimeline): NightBlind
   return { sunrise_min: (t.sunrise_h ?? 7) * 60, sunset_min: (t.sunset_h ?? 19) * 60 };
 }
 
-function importLogs(scenario: Scenario, timeline: ExposureTimeline, texts: Readonly<Record<string, string>>, warnings: string[]): Map<string, MinuteLightSeries> {
+function importLogs(scenario: Scenario, timeline: ExposureTimeline, texts: Readonly<Record<string, string>>, warnings: string[], imported: LogInRun[]): Map<string, MinuteLightSeries> {
   const used = new Set(scenario.personas.flatMap((p) => p.measuredLight.map((m) => m.log)));
   const out = new Map<string, MinuteLightSeries>();
   scenario.lightLogs.forEach((spec, i) => {
@@ -92,7 +94,9 @@ function importLogs(scenario: Scenario, timeline: ExposureTimeline, texts: Reado
       throw new RunInputError(`lightLogs[${i}].file`, `${spec.file}${first?.line != null ? ` line ${first.line}` : ''}: ${first?.message ?? 'cannot be read'}`);
     }
     for (const p of r.problems) if (p.severity === 'warning') warnings.push(`${spec.file}${p.line !== null ? ` line ${p.line}` : ''}: ${p.message}`);
-    out.set(spec.id, logToMinuteSeries(r.log, timeline.runStartUtc_ms, timeline.total_min));
+    const minutes = logToMinuteSeries(r.log, timeline.runStartUtc_ms, timeline.total_min);
+    out.set(spec.id, minutes);
+    imported.push({ id: spec.id, file: spec.file, log: r.log, minutes });
   });
   return out;
 }
@@ -111,7 +115,11 @@ export function runScenario(input: RunInput): RunOutput {
   const outdoor = outdoorLight(scenario, first, input.weather, outside);
   const warnings: string[] = [];
   if (outdoor.filledHours > 0) warnings.push(`weather file: ${outdoor.filledHours} hour(s) with missing values were filled from a neighbour`);
-  const logs = importLogs(scenario, first, input.lightLogTexts ?? {}, warnings);
+  const weather = weatherBasis(scenario, input.weather?.fileName ?? null, outdoor.weatherLocation);
+  const weatherWarning = weatherSiteWarning(weather, scenario.site);
+  if (weatherWarning !== null) warnings.push(weatherWarning);
+  const importedLogs: LogInRun[] = [];
+  const logs = importLogs(scenario, first, input.lightLogTexts ?? {}, warnings, importedLogs);
   const night = nightBlinds(scenario, first);
   const caches: EyeCaches = { weatherKey: outdoor.key, daylightFactors: new Map() };
   const wanted = input.personaIds === undefined ? undefined : new Set(input.personaIds);
@@ -177,7 +185,7 @@ export function runScenario(input: RunInput): RunOutput {
       weather: scenario.site.weather.kind === 'file' ? 'weather-file' : 'sky-model',
       sky_by_day: outdoor.skyByDay,
     },
-    models: { pacemaker: modelId, melatonin: 'St Hilaire et al. 2007 (J Theor Biol)', sleepiness: SLEEPINESS_MODELS[HEADLINE_SLEEPINESS_ID].name, light_input: 'melanopic EDI at the eye (CIE S 026), converted to the pacemaker calibration source', dlmo_definition: DLMO_DEFINITION, melatonin_suppression_definition: SUPPRESSION_DEFINITION },
+    models: { pacemaker: modelId, melatonin: `${MELATONIN_MODEL.name} (${melatoninCitation()})`, sleepiness: SLEEPINESS_MODELS[HEADLINE_SLEEPINESS_ID].name, light_input: 'melanopic EDI at the eye (CIE S 026), converted to the pacemaker calibration source', dlmo_definition: DLMO_DEFINITION, melatonin_suppression_definition: SUPPRESSION_DEFINITION },
     thresholds: {
       daytime_mel_edi_lx: DAYTIME_MEL_EDI_LX,
       pre_sleep_mel_edi_lx: PRE_SLEEP_MEL_EDI_LX,
@@ -191,6 +199,7 @@ export function runScenario(input: RunInput): RunOutput {
     local_clock: { utc_offsets: utcOffsetSpans(clock) },
     personas,
     warnings,
+    basis: { weather, measured_light: measuredLightUses(expanded.timelines.filter((t) => t.strategyId === BASELINE_ID && (wanted === undefined || wanted.has(t.personaId))), importedLogs) },
   };
   return { results, light, clock, outdoor };
 }

@@ -118,7 +118,8 @@ describe('strategies', () => {
   });
   it('creates timelines only for the personas a strategy is meant for', () => {
     const ex = expandScenario(demo);
-    expect(ex.timelines).toHaveLength(2 + 8);
+    // three people's baselines; the nurse's 4 strategies, the window-desk worker's 4, the deep-desk worker's 3
+    expect(ex.timelines).toHaveLength(3 + 4 + 4 + 3);
     expect(ex.variants.find((v) => v.id === 'ward-dark-bedroom')?.changes).toHaveLength(2);
   });
   it('switches the bedside lamp off in the dark-bedroom variant but not in the baseline', () => {

@@ -9,7 +9,8 @@ import { DateTime } from 'luxon';
 import type { Persona, Scenario, Strategy } from '../schema/scenario-types.js';
 import { clockSpan } from '../time/clock-time.js';
 import { wallTimeToUtc_ms } from '../time/local-calendar.js';
-import { applyStrategyToPlaces, describeStrategy } from './apply-strategy.js';
+import { applyStrategyToPlaces } from './apply-strategy.js';
+import { strategyChangeWords } from '../words/strategy-changes.js';
 import { applyBehaviour } from './behaviour-overlay.js';
 import { BASELINE_ID, type DayKind, type ExpandedScenario, type ExposureSlice, type ExposureTimeline, type SleepState, type StrategyVariant, type TimelineDay } from './exposure-types.js';
 import { IntervalPainter } from './interval-painter.js';
@@ -115,7 +116,7 @@ export function expandScenario(scenario: Scenario): ExpandedScenario {
   const everyone = scenario.personas.map((p) => p.id);
   const variants: StrategyVariant[] = [
     { id: BASELINE_ID, name: 'Baseline', changes: [], scenario, personaIds: everyone },
-    ...scenario.strategies.map((st) => ({ id: st.id, name: st.name, changes: describeStrategy(st), scenario: applyStrategyToPlaces(scenario, st), personaIds: st.personas ?? everyone })),
+    ...scenario.strategies.map((st) => ({ id: st.id, name: st.name, changes: strategyChangeWords(scenario, st), scenario: applyStrategyToPlaces(scenario, st), personaIds: st.personas ?? everyone })),
   ];
   const timelines: ExposureTimeline[] = [];
   for (const v of variants) {

@@ -150,7 +150,7 @@ describe.skipIf(!available)('workspace in the browser', () => {
     await expect(s.page.getByLabel('Latitude').inputValue()).resolves.toBe('52.4');
     await screenshot(s.page, 'site');
     await s.page.getByRole('button', { name: 'Places', exact: true }).click();
-    await s.page.getByRole('article', { name: 'Fernbrook office, open-plan floor 3' }).waitFor();
+    await s.page.getByRole('article', { name: 'Fernbrook office, floor 3, desk by the windows' }).waitFor();
     await screenshot(s.page, 'places');
   });
 
@@ -172,9 +172,9 @@ describe.skipIf(!available)('workspace in the browser', () => {
     await s.page.getByRole('button', { name: 'Undo' }).click();
     await poll(() => vehicle.count()).toBe(0);
 
-    const office = s.page.getByRole('article', { name: 'Fernbrook office, open-plan floor 3' });
+    const office = s.page.getByRole('article', { name: 'Fernbrook office, floor 3, desk by the windows' });
     // A place people work in cannot be removed while they do.
-    await expect(office.getByRole('button', { name: 'Remove Fernbrook office, open-plan floor 3' }).isDisabled()).resolves.toBe(true);
+    await expect(office.getByRole('button', { name: 'Remove Fernbrook office, floor 3, desk by the windows' }).isDisabled()).resolves.toBe(true);
     await office.getByRole('button', { name: 'Add luminaire' }).click();
     const added = office.getByRole('button', { name: 'Remove luminaire New luminaire' });
     await added.waitFor();
@@ -194,26 +194,26 @@ describe.skipIf(!available)('workspace in the browser', () => {
 
   it('adds and removes strategy changes and strategies, each step undoable', async () => {
     await s.page.getByRole('button', { name: 'Strategies', exact: true }).click();
-    const card = s.page.getByRole('article', { name: 'Outdoor lunch walk' });
+    const card = s.page.getByRole('article', { name: 'Bright light early in the night shift' });
     const changes = card.locator('.change-list > li');
     await poll(() => changes.count()).toBe(1);
-    await expect(card.getByRole('button', { name: 'Remove change 1 of Outdoor lunch walk' }).isDisabled()).resolves.toBe(true);
-    const form = s.page.getByRole('form', { name: 'Add a change to Outdoor lunch walk' });
+    await expect(card.getByRole('button', { name: 'Remove change 1 of Bright light early in the night shift' }).isDisabled()).resolves.toBe(true);
+    const form = s.page.getByRole('form', { name: 'Add a change to Bright light early in the night shift' });
     await form.getByRole('combobox', { name: 'Change', exact: true }).selectOption('set-blinds');
-    await form.getByRole('combobox', { name: 'Where', exact: true }).selectOption('office-floor');
+    await form.getByRole('combobox', { name: 'Where', exact: true }).selectOption('ward-station');
     await form.getByRole('button', { name: 'Add change' }).click();
     await poll(() => changes.count()).toBe(2);
-    await poll(() => card.locator('.change-list').innerText()).toContain('blinds rule becomes “always-down”');
+    await poll(() => card.locator('.change-list').innerText()).toContain('blinds kept down all the time');
     await card.getByRole('combobox', { name: 'Blinds rule' }).selectOption('down-at-night');
-    await poll(() => card.locator('.change-list').innerText()).toContain('blinds rule becomes “down-at-night”');
+    await poll(() => card.locator('.change-list').innerText()).toContain('blinds lowered from dusk to dawn');
     await card.scrollIntoViewIfNeeded();
     await screenshot(s.page, 'strategies-change-added');
-    await card.getByRole('button', { name: 'Remove change 2 of Outdoor lunch walk' }).click();
+    await card.getByRole('button', { name: 'Remove change 2 of Bright light early in the night shift' }).click();
     await poll(() => changes.count()).toBe(1);
     await s.page.getByRole('button', { name: 'Undo' }).click();
     await poll(() => changes.count()).toBe(2);
     await s.page.getByRole('button', { name: 'Undo' }).click();
-    await poll(() => card.locator('.change-list').innerText()).toContain('“always-down”');
+    await poll(() => card.locator('.change-list').innerText()).toContain('blinds kept down all the time');
     await s.page.getByRole('button', { name: 'Undo' }).click();
     await poll(() => changes.count()).toBe(1);
 

@@ -12,6 +12,7 @@ import { writeBriefingPdf } from '../../cli/report/write-briefing-pdf.js';
 import { DEMO_SCENARIO } from '../../schedules/demo/demo-scenario.js';
 import { validateScenarioValue } from '../../schedules/validation/validate-scenario.js';
 import { runScenario } from '../../schedules/run/run-scenario.js';
+import { withEnsemble } from '../../schedules/run/ensemble.js';
 import type { RunResults } from '../../schedules/run/results-types.js';
 import { demoSyntheticView } from './synthetic-briefing.js';
 import { pageVariances, pdfFonts, pdfImageCount, pdfInfo, pdfText } from './pdf-tools.js';
@@ -32,7 +33,8 @@ beforeAll(async () => {
   const validated = validateScenarioValue(DEMO_SCENARIO);
   if (validated.scenario === undefined) throw new Error('demo scenario does not validate');
   // through JSON, exactly as results.json is read back
-  results = JSON.parse(JSON.stringify(runScenario({ scenario: validated.scenario }).results)) as RunResults;
+  // with the model ensemble, as `zeitlight demo` runs it by default
+  results = JSON.parse(JSON.stringify(withEnsemble(runScenario({ scenario: validated.scenario })))) as RunResults;
   await writeBriefingPdf({ ...common, results, outPath: a4, paper: 'A4' });
   await writeBriefingPdf({ ...common, results, outPath: a4Again, paper: 'A4' });
   await writeBriefingPdf({ ...common, results, outPath: letter, paper: 'Letter' });
@@ -48,11 +50,21 @@ afterAll(() => {
   rmSync(work, { recursive: true, force: true });
 });
 
+/** The text of the pages from the one that starts with `first` up to (not including) the one that starts with `next`. */
+function sectionText(file: string, first: string, next: string): string {
+  const pages = Number(pdfInfo(file).Pages);
+  const texts = Array.from({ length: pages }, (_, i) => pdfText(file, i + 1));
+  const starts = (t: string, heading: string) => t.split('\n').slice(1, 6).some((l) => l.trim() === heading);
+  const from = texts.findIndex((t) => starts(t, first));
+  const to = texts.findIndex((t, i) => i > from && starts(t, next));
+  return texts.slice(from, to).join('\n');
+}
+
 describe('briefing PDF of the demo scenario', () => {
-  it('has the sections in order: cover, summary, what was modelled, results per person, methods, cautions', () => {
+  it('has the sections in order: cover, summary and recommendation, what was modelled, results per person, ranges, methods, how the numbers were checked, cautions', () => {
     // lower case: the cover's kicker is set in capitals by the style sheet
     const text = pdfText(a4).toLowerCase();
-    const order = ['lighting and body-clock briefing', 'Summary', 'What was modelled', ...DEMO_SCENARIO.personas.map((p) => `Results: ${p.name}`), 'Methods and assumptions', 'Validation summary', 'Cautions\n'];
+    const order = ['lighting and body-clock briefing', 'Summary and recommendation', 'What was modelled', ...DEMO_SCENARIO.personas.map((p) => `Results: ${p.name}`), 'Ranges across models and people', 'Methods and assumptions', 'How these numbers were checked', 'Cautions\n'];
     let at = -1;
     for (const heading of order) {
       const found = text.indexOf(heading.toLowerCase(), at + 1);
@@ -67,7 +79,7 @@ describe('briefing PDF of the demo scenario', () => {
     expect(cover).toContain('Lindenhafen (invented town)');
     expect(cover).toContain('1 December 2026');
     expect(cover).toContain('Zeitlight 0.1.0');
-    expect(cover).toContain('zeitlight-scenario version 2');
+    expect(cover).toContain('scenario file format version 2');
     expect(cover).not.toContain('not a simulation result');
     expect(pdfText(synthetic, 1)).toContain('not a simulation result');
   });
@@ -75,7 +87,7 @@ describe('briefing PDF of the demo scenario', () => {
   it('shows the recommendation and every strategy’s three numbers from results.json on the summary page', () => {
     // pdftotext's layout mode may close up "9 %" to "9%" in tight columns; compare without that space
     const squeeze = (t: string) => t.replace(/\s+/g, ' ').replace(/(\d) %/g, '$1%');
-    const summaryPages = squeeze(pdfText(a4, 2) + pdfText(a4, 3));
+    const summaryPages = squeeze(sectionText(a4, 'Summary and recommendation', 'What was modelled'));
     for (const persona of results.personas) {
       expect(summaryPages).toContain(persona.name);
       expect(summaryPages).toContain(squeeze(persona.recommendation.reason));
@@ -95,11 +107,11 @@ describe('briefing PDF of the demo scenario', () => {
 
   it('draws the view-model path too: a synthetic layout view gives every section, with cohort ranges when given', () => {
     const text = pdfText(synthetic);
-    for (const heading of ['Summary', 'What was modelled', 'Cohort: ranges across virtual occupants', 'Methods and assumptions', 'Cautions']) expect(text).toContain(heading);
+    for (const heading of ['Summary and recommendation', 'What was modelled', 'Across people: virtual occupants', 'Methods and assumptions', 'Cautions']) expect(text).toContain(heading);
     const squeezed = text.replace(/\s+/g, ' ');
     expect(squeezed).toContain('64 virtual occupants');
     expect(squeezed).toMatch(/12 %.*32 %.*58 %/);
-    expect(pdfText(a4)).not.toContain('Cohort: ranges');
+    expect(pdfText(a4)).not.toContain('virtual occupants');
   });
 
   it('carries the cautions on the summary page and again at the end', () => {

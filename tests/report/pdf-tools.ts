@@ -73,3 +73,38 @@ export function pgmVariance(data: Buffer): number {
 export function pdfImageCount(file: string): number {
   return execFileSync('pdfimages', ['-list', file], { encoding: 'utf8' }).split('\n').slice(2).filter((l) => l.trim() !== '').length;
 }
+
+export interface PageFill {
+  readonly page: number;
+  /** Share of the printable height (between the header and footer margins) down to the lowest text on the page. */
+  readonly fill: number;
+  /** Text of the first line below the header. */
+  readonly firstLine: string;
+}
+
+/**
+ * How full each page is, read from `pdftotext -bbox-layout` (text boxes in PDF points): the lowest
+ * text between the top and bottom margins (mm, as printed) against the printable height. Charts end
+ * in axis labels and legends, tables in text rows, so the lowest text marks the end of the content.
+ */
+export function pageFills(file: string, margins_mm = { top: 18, bottom: 16 }): PageFill[] {
+  const xml = execFileSync('pdftotext', ['-bbox-layout', file, '-'], { encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 });
+  const pt = (mm: number) => (mm * 72) / 25.4;
+  const pages = xml.split('<page ').slice(1);
+  return pages.map((p, i) => {
+    const height = Number(/height="([\d.]+)"/.exec(p)?.[1]);
+    const top = pt(margins_mm.top);
+    const bottom = height - pt(margins_mm.bottom);
+    let lowest = top;
+    let first: { y: number; text: string } | null = null;
+    for (const line of p.split('<line ').slice(1)) {
+      const yMin = Number(/yMin="([\d.]+)"/.exec(line)?.[1]);
+      const yMax = Number(/yMax="([\d.]+)"/.exec(line)?.[1]);
+      if (!(yMin >= top - 1 && yMax <= bottom + 1)) continue;
+      lowest = Math.max(lowest, yMax);
+      const text = [...line.matchAll(/<word[^>]*>([^<]*)<\/word>/g)].map((m) => m[1]).join(' ');
+      if (first === null || yMin < first.y) first = { y: yMin, text };
+    }
+    return { page: i + 1, fill: (lowest - top) / (bottom - top), firstLine: (first?.text ?? '').replace(/&apos;|&#39;/g, "'").replace(/&quot;/g, '"').replace(/&lt;/g, '<').replace(/&gt;/g, '>').replace(/&amp;/g, '&') };
+  });
+}

@@ -12,7 +12,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, test } from 'vitest';
 import { runCli } from '../../cli/main.js';
-import { DEMO_SCENARIO } from '../../schedules/index.js';
+import { demoPart } from '../../schedules/demo/demo-part.js';
 import { PROJECT_ROOT } from '../helpers/run-cli.js';
 
 const LAUNCHER = join(PROJECT_ROOT, 'bin', 'zeitlight.mjs');
@@ -62,8 +62,8 @@ function runAndKill(args: string[], cwd: string, opts: { delay_ms?: number; kill
 }
 
 function scenario(name: string): string {
-  const desk = DEMO_SCENARIO.personas.filter((p) => p.id === 'desk-worker');
-  return JSON.stringify({ ...DEMO_SCENARIO, name, run: { startDate: '2026-03-23', days: 2 }, personas: desk, rosters: [], strategies: (DEMO_SCENARIO.strategies ?? []).filter((s) => s.personas?.includes('desk-worker')).slice(0, 1) });
+  const desk = demoPart(['desk-worker']);
+  return JSON.stringify({ ...desk, name, run: { startDate: '2026-03-23', days: 2 }, strategies: (desk.strategies ?? []).slice(0, 1) });
 }
 
 describe.skipIf(!built)('zeitlight run killed part-way', () => {

@@ -16,7 +16,8 @@ describe('results adapter on the pipeline', () => {
     expect(outcome.status).toBe('ready');
     if (outcome.status !== 'ready') return;
     const v = outcome.view;
-    expect(v.runs.length).toBe(2 * 5);
+    // the nurse and the window-desk worker with the baseline and 4 strategies each, the deep-desk worker with 3
+    expect(v.runs.length).toBe(5 + 5 + 4);
     expect(progress[progress.length - 1]).toBe(1);
     const run = v.runs[0];
     const steps = Math.ceil((3 * 1440) / VIEW_LIGHT_STEP_MIN);
@@ -25,6 +26,6 @@ describe('results adapter on the pipeline', () => {
     expect(run?.kssHourly.length).toBe(72);
     expect(run?.melatonin.level.length).toBe(run?.melatonin.unsuppressed?.length);
     expect(run?.metrics.map((m) => m.id)).toContain('suppression');
-    expect(v.recommendations?.length).toBe(2);
+    expect(v.recommendations?.length).toBe(3);
   }, 60_000);
 });

@@ -7,6 +7,7 @@ import { validateScenarioValue } from '../../../schedules/validation/validate-sc
 import { Methods, RangesSection } from './components/sections.js';
 import { BRIEFING_DOCUMENT_KIND } from './briefing-document.js';
 import { reportModels } from './report-models.js';
+import { signedShift } from '../../../schedules/words/shift-sign.js';
 import { pacemakerCitation, sleepinessCitation } from '../../../model/circadian/model-citations.js';
 import type { PacemakerId } from '../../../model/circadian/registry.js';
 import type { SleepinessModelId } from '../../../model/circadian/sleepiness-registry.js';
@@ -53,10 +54,10 @@ describe('model ensemble in the briefing', () => {
 
   it('gives each strategy’s headline figures with their range across the models on the ranges page', () => {
     const doc = { kind: BRIEFING_DOCUMENT_KIND, paper: 'A4', generatedOn: '2026-12-01', zeitlightVersion: 'test', scenario: {}, results } as const;
-    const html = renderToStaticMarkup(createElement(RangesSection, { doc, view, results }));
+    const html = renderToStaticMarkup(createElement(RangesSection, { doc, view }));
     const s = results.personas[0]?.strategies.find((x) => x.id === 'office-dim-evening');
     const shift = s?.ensemble?.mean_phase_shift_h;
     expect(html).toContain('Across published models');
-    expect(html).toContain(`${(shift?.min ?? NaN).toFixed(2).replace('-', '−')} to ${(shift?.max ?? NaN).toFixed(2).replace('-', '−')} across 3`);
+    expect(html).toContain(`${signedShift(shift?.min ?? NaN)} to ${signedShift(shift?.max ?? NaN)}`);
   });
 });

@@ -75,10 +75,10 @@ describe('persona summaries', () => {
     cautions: [],
   };
 
-  it('gives the DLMO advance of the recommended strategy as a positive shift with a plain sentence', () => {
+  it('gives the DLMO advance of the recommended strategy as a negative shift (+ later, − earlier) with a plain sentence', () => {
     const [s] = personaSummaries(view, new Map([['p:baseline', [60, 60, 60, 60]], ['p:morning', [60, 60, 60, 60]]]));
     expect(s?.recommended?.strategy.id).toBe('morning');
-    expect(s?.recommended?.phaseShift_h).toBeCloseTo(0.5, 10);
+    expect(s?.recommended?.phaseShift_h).toBeCloseTo(-0.5, 10);
     expect(s?.sentences.phase).toContain('0.5 h earlier');
     expect(s?.sentences.suppression).toContain('10 %');
     expect(s?.sentences.sleepiness).toContain('25 % of work hours');

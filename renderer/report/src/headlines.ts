@@ -1,6 +1,8 @@
 // The summary numbers per persona and strategy, and the recommended strategy.
-//  - Phase shift vs baseline: DLMO on the last day both runs have it, hours, positive = advance
-//    (earlier), as in the Body clock view (renderer/src/charts/phase-data.ts).
+//  - Body-clock shift vs baseline, hours, + later and − earlier (the one sign convention,
+//    schedules/words/shift-sign.ts): the results' mean CBTmin shift, or for a view without results
+//    the DLMO on the last day both runs have it (renderer/src/charts/phase-data.ts gives + earlier;
+//    its sign is turned here).
 //  - Alignment: misalignment of the body clock with the person's work and sleep hours, hours per
 //    day (schedules/run/alignment.ts): the results' own figures, or for a view without them
 //    (layout checks) the same measure on the view's markers, sleep and work minutes.
@@ -21,6 +23,7 @@ import { compareByRule, pickByRule, RECOMMENDATION_RULE, type RuleFigures } from
 
 export interface StrategyHeadline {
   readonly strategy: NamedItem;
+  /** Body-clock shift vs the baseline, h: + later, − earlier. */
   readonly phaseShift_h: number | null;
   readonly suppression_pct: number | null;
   readonly sleepyShare_pct: number | null;
@@ -98,13 +101,15 @@ export function pickRecommended(baseline: StrategyHeadline | null, others: reado
   return best;
 }
 
+/** phase-data.ts gives + earlier; the briefing's convention is + later. */
+const laterOf = (earlier_h: number | null): number | null => (earlier_h === null ? null : earlier_h === 0 ? 0 : -earlier_h);
+
 const pct = (v: number | null) => (v === null ? 'not available' : `${formatNumber(v, 0)} %`);
 
 function phaseSentence(person: string, rec: StrategyHeadline | null, base: StrategyHeadline | null, isBaseline: boolean): string {
   if (rec === null) return 'Phase shift: not available from these results.';
   if (isBaseline) return `Phase shift: the baseline is the reference, so there is no shift to report for ${person}. ${baselineAlignmentSentence(person, rec.alignment)}`;
-  const later = rec.phaseShift_h === null ? null : -rec.phaseShift_h;
-  return `Phase shift: ${lastDayShiftSentence(person, rec.strategy.name, 'DLMO', later, rec.alignment, base?.alignment)}`;
+  return `Phase shift: ${lastDayShiftSentence(person, rec.strategy.name, 'DLMO', rec.phaseShift_h, rec.alignment, base?.alignment)}`;
 }
 
 function suppressionSentence(rec: StrategyHeadline | null, base: StrategyHeadline | null, isBaseline: boolean): string {
@@ -131,7 +136,7 @@ export function personaSummaries(view: ResultsView, workMinutesPerHour: Readonly
       const weights = workMinutesPerHour.get(`${persona.id}:${strategy.id}`);
       return {
         strategy,
-        phaseShift_h: baselineRun === undefined || strategy.id === view.baselineId ? (strategy.id === view.baselineId ? 0 : null) : phaseShiftVsBaseline_h(run, baselineRun, 'dlmo'),
+        phaseShift_h: baselineRun === undefined || strategy.id === view.baselineId ? (strategy.id === view.baselineId ? 0 : null) : laterOf(phaseShiftVsBaseline_h(run, baselineRun, 'dlmo')),
         suppression_pct: suppressionOf(run),
         sleepyShare_pct: sleepyShare_pct(run.kssHourly, basis === 'work' ? (hasWork(weights) ? weights : []) : null),
         alignment: run.alignment !== undefined ? run.alignment : viewAlignment(run, hasWork(weights) ? weights : [], view.days),

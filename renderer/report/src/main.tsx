@@ -5,7 +5,7 @@ import { flushSync } from 'react-dom';
 import { createRoot, type Root } from 'react-dom/client';
 import { checkBriefingDocument } from './briefing-document.js';
 import { scenarioFacts } from './scenario-facts.js';
-import { validationRecords } from './validation-records.js';
+import { plainValidationPage, validationRecords } from './validation-records.js';
 import { printSettings } from './print-settings.js';
 import { BriefingReport } from './BriefingReport.js';
 import { reportData } from './report-data.js';
@@ -32,7 +32,7 @@ function render(input: unknown): void {
   try {
     const data = reportData(checked.document, facts.facts);
     if ('error' in data) return fail(data.error);
-    flushSync(() => root?.render(<BriefingReport data={data} records={validationRecords()} />));
+    flushSync(() => root?.render(<BriefingReport data={data} records={validationRecords()} checked={plainValidationPage()} />));
   } catch (error) {
     return fail(`report page: ${error instanceof Error ? error.message : String(error)}`);
   }

@@ -8,6 +8,7 @@
 import type { PersonaResult, RunResults, StrategyResult } from '../../../schedules/run/results-types.js';
 import type { LightSourceSeries, MetricValue, ResultsView, RunView, SourceKind } from '../../src/results/view-model.js';
 import type { PersonaSummary, StrategyHeadline } from './headlines.js';
+import { PHASE_SHIFT_SIGN_LABEL } from '../../../schedules/words/shift-sign.js';
 import { offsetsFromHourStarts, WallClock } from '../../src/charts/wall-clock.js';
 
 export const RESULTS_FORMAT_NAME = 'zeitlight-results';
@@ -47,7 +48,7 @@ function metricsOf(s: StrategyResult): MetricValue[] {
   return [
     metric('work-kss7-share', 'Work hours at KSS ≥ 7', '%', m.work_hours_kss_ge_7_share === null ? null : m.work_hours_kss_ge_7_share * 100, 0, 'lower'),
     metric('suppression', 'Melatonin suppression per night (mean)', '%', m.mean_melatonin_suppression_pct, 0, 'lower'),
-    metric('phase-shift', 'Body-clock shift vs baseline (CBTmin, last days)', 'h', m.mean_phase_shift_h, 2, 'none', 'later', 'earlier'),
+    metric('phase-shift', `Body-clock shift vs baseline, last days (${PHASE_SHIFT_SIGN_LABEL})`, 'h', m.mean_phase_shift_h, 2, 'none', 'later', 'earlier'),
     metric('misalignment', 'Misalignment with work and sleep hours (per day)', 'h', s.alignment?.misalignment_h_per_day ?? null, 1, 'lower', 'more', 'less'),
     metric('daytime-250', 'Daytime hours ≥ 250 lx melanopic EDI (per day)', 'h', m.mean_daytime_hours_ge_250_lx, 1, 'higher'),
     metric('mel-dose', 'Melanopic dose (per day)', 'lx·h', m.mean_mel_dose_lx_h, 0, 'higher'),
@@ -110,8 +111,8 @@ export function summariesFromResults(results: RunResults): PersonaSummary[] {
   return results.personas.map((p) => {
     const all: StrategyHeadline[] = p.strategies.map((s) => ({
       strategy: { id: s.id, name: s.name },
-      // results.json: + later; the briefing's headline convention: + earlier (advance)
-      phaseShift_h: s.is_baseline ? 0 : s.summary.mean_phase_shift_h === null ? null : -s.summary.mean_phase_shift_h,
+      // + later, − earlier, as in results.json (the one sign convention, schedules/words/shift-sign.ts)
+      phaseShift_h: s.is_baseline ? 0 : s.summary.mean_phase_shift_h,
       suppression_pct: s.summary.mean_melatonin_suppression_pct,
       sleepyShare_pct: s.summary.work_hours_kss_ge_7_share === null ? null : s.summary.work_hours_kss_ge_7_share * 100,
       // Absent in results written before the alignment figures existed.

@@ -3,10 +3,10 @@
 // (validated and with defaults filled by the scenario schema) and the expanded timelines of
 // schedules/ — the same expansion the run pipeline uses.
 import { scenarioSchema } from '../../../schedules/schema/scenario-schema.js';
-import type { Persona, Place, Scenario, Strategy } from '../../../schedules/schema/scenario-types.js';
+import type { Persona, Scenario, Strategy } from '../../../schedules/schema/scenario-types.js';
 import type { Activity } from '../../../schedules/schema/personas-schema.js';
 import { expandPersona } from '../../../schedules/timeline/expand-scenario.js';
-import { describeStrategy } from '../../../schedules/timeline/apply-strategy.js';
+import { placeWords, rosterName, shortName, strategyChangeWords } from '../../../schedules/words/index.js';
 
 export interface TimelineBar {
   readonly from_h: number;
@@ -61,21 +61,11 @@ function coordinates(lat: number, lon: number): string {
   return `${Math.abs(lat).toFixed(2)}° ${lat >= 0 ? 'N' : 'S'}, ${Math.abs(lon).toFixed(2)}° ${lon >= 0 ? 'E' : 'W'}`;
 }
 
-function placeLine(place: Place): string {
-  if (place.kind === 'room') {
-    const windows = place.windows.length === 0 ? 'no windows' : `${place.windows.length} window${place.windows.length === 1 ? '' : 's'}`;
-    const lums = place.luminaires.map((l) => `${l.name ?? l.id} ${l.eyeIlluminance_lx} lx at the eye`).join('; ');
-    const screens = place.screens.length === 0 ? '' : `, ${place.screens.length} screen${place.screens.length === 1 ? '' : 's'}`;
-    return `Room ${place.width_m} × ${place.depth_m} × ${place.height_m} m, ${windows}${screens}${lums === '' ? ', no electric light' : `; luminaires: ${lums}`}${place.blinds.rule === 'none' ? '' : `; blinds: ${place.blinds.rule}`}.`;
-  }
-  if (place.kind === 'vehicle') return `Vehicle (${place.mode}), window transmittance ${Math.round(place.windowTransmittance * 100)} %.`;
-  return `Outdoors, ${place.shade === 'open' ? 'open sky' : place.shade === 'partial' ? 'partly shaded' : 'fully shaded'}; street lighting ${place.streetLighting_lx} lx after dark.`;
-}
-
 function personaDetails(persona: Persona, scenario: Scenario): string {
-  const routine = persona.roster !== undefined ? `roster “${scenario.rosters.find((r) => r.id === persona.roster?.roster)?.name ?? persona.roster.roster}”` : 'weekly routine';
-  const sleep = persona.sleep.mode === 'free' ? 'sleep predicted by the model' : 'sleep as planned';
-  return `Age ${persona.age_y} y; intrinsic period ${persona.intrinsicPeriod_h.toFixed(2)} h; light sensitivity ×${persona.lightSensitivity}; ${routine}; ${sleep}.`;
+  const routine = persona.roster !== undefined ? `works the shift roster “${rosterName(scenario, persona.roster.roster)}”` : 'keeps a weekly routine';
+  const sleep = persona.sleep.mode === 'free' ? 'sleep times predicted by the model' : 'sleeps at the times planned';
+  const sensitivity = persona.lightSensitivity === 1 ? 'average sensitivity to light (as in the published models)' : `sensitivity to light ${persona.lightSensitivity} times the average`;
+  return `Age ${persona.age_y}; body clock running at ${persona.intrinsicPeriod_h.toFixed(2)} h a cycle when left to itself; ${sensitivity}; ${routine}; ${sleep}.`;
 }
 
 function timelineRows(scenario: Scenario, persona: Persona, maxDays: number): { rows: TimelineRow[]; work: number[] } {
@@ -115,14 +105,17 @@ function workPerHour(slices: readonly { start_min: number; end_min: number; acti
 }
 
 function strategyFacts(strategy: Strategy, scenario: Scenario): StrategyFacts {
-  const names = (strategy.personas ?? scenario.personas.map((p) => p.id)).map((id) => scenario.personas.find((p) => p.id === id)?.name ?? id);
-  return { id: strategy.id, name: strategy.name, description: strategy.description ?? null, appliesTo: names.join(', '), changes: describeStrategy(strategy) };
+  const names = (strategy.personas ?? scenario.personas.map((p) => p.id)).flatMap((id) => {
+    const p = scenario.personas.find((x) => x.id === id);
+    return p === undefined ? [] : [shortName(p.name)];
+  });
+  return { id: strategy.id, name: strategy.name, description: strategy.description ?? null, appliesTo: names.join(', '), changes: strategyChangeWords(scenario, strategy) };
 }
 
 function weatherLine(scenario: Scenario): string {
   const w = scenario.site.weather;
-  if (w.kind === 'file') return `Hourly weather from the file “${w.file}” (${w.format.toUpperCase()}).`;
-  return `Generated skies following a seasonal mix of clear, partly cloudy and overcast days (seed ${w.seed}).`;
+  if (w.kind === 'file') return `Daylight from the hourly weather file ${w.file}.`;
+  return `Daylight from generated skies: each day clear, partly cloudy or overcast, drawn from the seasonal mix entered for the site (the same days on every run with random seed ${w.seed}).`;
 }
 
 /** Facts for the "What was modelled" section, or a message naming the first problem. */
@@ -157,7 +150,7 @@ export function scenarioFacts(input: unknown, timelineDays = 7): { ok: true; fac
       siteLine: `${site.name ?? 'Site'} — ${coordinates(site.latitude_deg, site.longitude_deg)}, ${site.elevation_m} m above sea level, time zone ${site.timeZone}; ground reflectance ${site.ground.reflectance}.`,
       weatherLine: weatherLine(scenario),
       period: `${scenario.run.days} days from ${scenario.run.startDate} to ${endDay.toISOString().slice(0, 10)}`,
-      places: scenario.places.map((p) => ({ name: p.name ?? p.id, line: placeLine(p) })),
+      places: scenario.places.map((p) => ({ name: p.name ?? placeWords(p).replace(/[,;].*$/, ''), line: placeWords(p) })),
       personas,
       strategies: scenario.strategies.map((s) => strategyFacts(s, scenario)),
       workMinutesPerHour: work,

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { DEMO_SCENARIO } from '../../../schedules/demo/demo-scenario.js';
+import { demoPart } from '../../../schedules/demo/demo-part.js';
 import { validateScenarioValue } from '../../../schedules/validation/validate-scenario.js';
 import type { Scenario } from '../../../schedules/schema/scenario-types.js';
 import { populationCohortSpread, zeroCohortSpread } from '../../../model/cohort/occupant-traits.js';
@@ -9,8 +9,7 @@ import type { CohortWorkerToPage } from './cohort-protocol.js';
 import { occupantPerson, OccupantRunner, runOccupantJob } from './occupant-job.js';
 
 function deskScenario(): Scenario {
-  const input = structuredClone(DEMO_SCENARIO);
-  const small = { ...input, personas: input.personas.filter((p) => p.id === 'desk-worker'), strategies: (input.strategies ?? []).filter((s) => s.id === 'office-tunable-white') };
+  const small = demoPart(['desk-worker'], ['office-tunable-white']);
   const checked = validateScenarioValue(small);
   if (!checked.ok || checked.scenario === undefined) throw new Error('demo subset invalid');
   return checked.scenario;

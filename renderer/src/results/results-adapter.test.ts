@@ -1,15 +1,14 @@
 import { describe, expect, it } from 'vitest';
-import { DEMO_SCENARIO } from '../../../schedules/demo/demo-scenario.js';
+import { demoPart } from '../../../schedules/demo/demo-part.js';
 import { validateScenarioValue } from '../../../schedules/validation/validate-scenario.js';
 import { clockHoursOfLocal, runScenarioForView } from './results-adapter.js';
 import { findRun, type ResultsView } from './view-model.js';
 
 async function deskWorkerView(morningLux: number): Promise<ResultsView> {
-  const input = structuredClone(DEMO_SCENARIO);
-  const desk = { ...input, personas: input.personas.filter((p) => p.id === 'desk-worker'), strategies: (input.strategies ?? []).filter((s) => s.id === 'office-tunable-white') };
-  const change = desk.strategies[0]?.changes[0];
+  const desk = demoPart(['desk-worker'], ['office-tunable-white']);
+  const change = desk.strategies?.[0]?.changes[0];
   if (change?.op !== 'set-luminaire') throw new Error('demo strategy changed shape');
-  desk.strategies = [{ ...desk.strategies[0]!, changes: [{ ...change, eyeIlluminance_lx: morningLux }] }];
+  desk.strategies = [{ ...desk.strategies![0]!, changes: [{ ...change, eyeIlluminance_lx: morningLux }] }];
   const checked = validateScenarioValue(desk);
   if (!checked.ok || checked.scenario === undefined) throw new Error(JSON.stringify(checked.problems));
   const outcome = await runScenarioForView(checked.scenario, () => {});

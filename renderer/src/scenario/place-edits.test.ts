@@ -45,8 +45,8 @@ describe('adding and removing strategy changes', () => {
     for (const kind of ['set-luminaire', 'add-luminaire', 'remove-luminaire', 'set-blinds'] as const) {
       const target = changeTargets(demo(), kind)[0]!;
       const change = newChange(demo(), kind, target.value)!;
-      const s = addChange(demo(), 'office-lunch-walk', change);
-      expect(s.strategies?.find((x) => x.id === 'office-lunch-walk')?.changes).toHaveLength(2);
+      const s = addChange(demo(), 'ward-bright-night-start', change);
+      expect(s.strategies?.find((x) => x.id === 'ward-bright-night-start')?.changes).toHaveLength(2);
       expect(errors(s)).toEqual([]);
     }
     expect(newChange(demo(), 'set-luminaire', 'nowhere/nothing')).toBeNull();
@@ -54,10 +54,10 @@ describe('adding and removing strategy changes', () => {
 
   it('removes a change but never the last one of a strategy', () => {
     const target = changeTargets(demo(), 'set-blinds')[0]!;
-    const s = addChange(demo(), 'office-lunch-walk', newChange(demo(), 'set-blinds', target.value)!);
-    const back = removeChange(s, 'office-lunch-walk', 1);
+    const s = addChange(demo(), 'ward-bright-night-start', newChange(demo(), 'set-blinds', target.value)!);
+    const back = removeChange(s, 'ward-bright-night-start', 1);
     expect(back.strategies).toEqual(demo().strategies);
-    expect(removeChange(back, 'office-lunch-walk', 0).strategies).toEqual(demo().strategies);
+    expect(removeChange(back, 'ward-bright-night-start', 0).strategies).toEqual(demo().strategies);
   });
 
   it('adds a new strategy with one first change that passes the format checks', () => {

@@ -2,8 +2,7 @@
 // recommended strategy), phase by day, melatonin, KSS by hour and a KSS grid, metrics table.
 import type { ResultsView } from '../../../src/results/view-model.js';
 import { findRun } from '../../../src/results/view-model.js';
-import { comparisonRows, ensembleRangeText, formatMetricDifference, formatMetricValue, formatNumber } from '../../../src/charts/comparison-data.js';
-import { ensembleModelsWords } from '../../../src/results/ensemble-view.js';
+import { comparisonRows, formatMetricDifference, formatMetricValue, formatNumber } from '../../../src/charts/comparison-data.js';
 import { kssGrid } from '../../../src/charts/kss-grid-data.js';
 import { kssColour } from '../../../src/charts/palette.js';
 import { bandCompliance, lightAtEyeRows, recommendationBands } from '../../../src/charts/light-at-eye-data.js';
@@ -13,7 +12,8 @@ import type { PersonaSummary } from '../headlines.js';
 import { lightAxisTop_lx, PrintKssChart, PrintLightChart, PrintLightCompareChart, PrintMelatoninChart, PrintPhaseChart, PrintSuppressionChart } from './print-charts.js';
 import { Section } from './sections.js';
 
-const BAND_WORDS = { day: 'day (≥ 250 lx)', evening: 'evening (≤ 10 lx)', night: 'night (≤ 1 lx)' } as const;
+/** Bands named by the person's own sleep (a night worker's "3 h before sleep" falls in the morning). */
+const BAND_WORDS = { day: 'awake (≥ 250 lx)', evening: 'last 3 h before sleep (≤ 10 lx)', night: 'asleep (≤ 1 lx)' } as const;
 
 function ComplianceLine({ view, personaId, strategyId, day }: { view: ResultsView; personaId: string; strategyId: string; day: number }) {
   const run = findRun(view, personaId, strategyId);
@@ -117,27 +117,12 @@ function MetricsTable({ view, personaId }: { view: ResultsView; personaId: strin
                     ({row.clock ? formatMetricDifference(row, c.difference) : signedDifference(c.difference, row.decimals)})
                   </span>
                 )}
-                {c.ensemble !== undefined && <span className="ensemble-range">{ensembleRangeText(c.ensemble, row.decimals)}</span>}
               </td>
             ))}
           </tr>
         ))}
       </tbody>
     </table>
-  );
-}
-
-/** Strategies whose rank changes with the model, in words; a line saying the ranking holds otherwise. */
-function EnsembleRanking({ view, personaId }: { view: ResultsView; personaId: string }) {
-  if (view.ensemble === undefined) return null;
-  const sentences = view.ensemble.rankings.find((r) => r.personaId === personaId)?.sentences ?? [];
-  if (sentences.length === 0) return <p className="small">Across the {ensembleModelsWords(view.ensemble)}, every strategy keeps its rank under the recommendation rule.</p>;
-  return (
-    <ul className="small ensemble-ranking">
-      {sentences.map((sentence) => (
-        <li key={sentence}>{sentence}</li>
-      ))}
-    </ul>
   );
 }
 
@@ -150,35 +135,36 @@ export function PersonaResults({ view, summary, day, nightly }: { view: ResultsV
   const rec = summary.recommended;
   const recRun = rec === null || rec === summary.baseline ? undefined : findRun(view, personaId, rec.strategy.id);
   // one axis for both light charts, so they compare at a glance
-  const axisTop_lx = Math.max(...[baseline, recRun].map((r) => (r === undefined ? 0 : lightAxisTop_lx(lightAtEyeRows(r.light, day, 10).map((x) => x.total_lx)).top)));
+  const clock = wallClockOf(view);
+  const axisTop_lx = Math.max(...[baseline, recRun].map((r) => (r === undefined ? 0 : lightAxisTop_lx(lightAtEyeRows(r.light, day, 10, clock).map((x) => x.total_lx)).top)));
   return (
     <Section id={`results-${personaId}`} title={`Results: ${summary.persona.name}`}>
       {baseline !== undefined && (
         <div className="keep">
           <h3>Light at the eye</h3>
-          <PrintLightChart run={baseline} day={day} axisTop_lx={axisTop_lx} title={`Melanopic EDI at the eye by source on ${dayLabel} — Baseline`} />
+          <PrintLightChart run={baseline} day={day} clock={clock} axisTop_lx={axisTop_lx} title={`Melanopic EDI at the eye by source on ${dayLabel} — Baseline`} />
           <ComplianceLine view={view} personaId={personaId} strategyId={baseline.strategyId} day={day} />
         </div>
       )}
       {recRun !== undefined && rec !== null && (
         <div className="keep">
-          <PrintLightChart run={recRun} day={day} axisTop_lx={axisTop_lx} title={`Melanopic EDI at the eye by source on ${dayLabel} — ${rec.strategy.name}`} />
+          <PrintLightChart run={recRun} day={day} clock={clock} axisTop_lx={axisTop_lx} title={`Melanopic EDI at the eye by source on ${dayLabel} — ${rec.strategy.name}`} />
           <ComplianceLine view={view} personaId={personaId} strategyId={recRun.strategyId} day={day} />
         </div>
       )}
       {recRun !== undefined && rec !== null && baseline !== undefined && (
         <div className="keep">
-          <PrintLightCompareChart runs={[baseline, recRun]} names={['Baseline', rec.strategy.name]} day={day} title={`Total melanopic EDI on ${dayLabel}: baseline and ${rec.strategy.name} (log scale)`} />
+          <PrintLightCompareChart clock={clock} runs={[baseline, recRun]} names={['Baseline', rec.strategy.name]} day={day} title={`Total melanopic EDI on ${dayLabel}: baseline and ${rec.strategy.name} (log scale)`} />
         </div>
       )}
       <div className="keep">
         <h3>Body clock</h3>
-        <PrintPhaseChart view={view} runs={runs} strategies={strategies} />
+        <PrintPhaseChart view={view} runs={runs} strategies={strategies} clock={clock} />
       </div>
       <div className="keep">
         <h3>Melatonin</h3>
         {runs.some((r) => r.melatonin.time_h.length > 0) ? (
-          <PrintMelatoninChart runs={runs} strategies={strategies} day={day} dayLabel={dayLabel} />
+          <PrintMelatoninChart runs={runs} strategies={strategies} day={day} dayLabel={dayLabel} clock={clock} />
         ) : nightly !== null ? (
           <PrintSuppressionChart view={view} strategies={strategies} nights={new Map(strategies.map((s) => [s.id, nightly.get(`${personaId}:${s.id}`) ?? []]))} />
         ) : (
@@ -187,17 +173,16 @@ export function PersonaResults({ view, summary, day, nightly }: { view: ResultsV
       </div>
       <div className="keep">
         <h3>Sleepiness</h3>
-        <PrintKssChart runs={runs} strategies={strategies} day={day} dayLabel={dayLabel} />
+        <PrintKssChart runs={runs} strategies={strategies} day={day} dayLabel={dayLabel} clock={clock} />
       </div>
       <KssGridTable view={view} personaId={personaId} strategyId={rec?.strategy.id ?? view.baselineId} />
       <div className="keep">
         <h3>Metrics</h3>
         <p className="small muted">
           Values per strategy; in brackets the difference from the baseline.
-          {view.ensemble !== undefined && ` Below a value: its range when the same light is run through the ${ensembleModelsWords(view.ensemble)} listed under Methods (the value shown is the default model’s).`}
+          {view.ensemble !== undefined && ' The ranges of the headline figures across published models are given under “Ranges across models and people”.'}
         </p>
         <MetricsTable view={view} personaId={personaId} />
-        <EnsembleRanking view={view} personaId={personaId} />
       </div>
     </Section>
   );

@@ -2,6 +2,7 @@
 // the app's activity colours, clock hours across.
 import type { TimelineRow } from '../scenario-facts.js';
 import { ACTIVITY_STYLE } from '../../../src/components/WeekTimeline.js';
+import { ACTIVITY_LABELS } from '../../../../schedules/words/scenario-terms.js';
 
 const LABEL_W = 64;
 const ROW_H = 11;
@@ -39,7 +40,7 @@ export function TimelineDrawing({ rows, width = 640 }: { rows: readonly Timeline
         {used.map((a) => (
           <li key={a}>
             <span className="swatch" style={{ background: (ACTIVITY_STYLE[a] ?? ACTIVITY_STYLE.other)?.fill }} />
-            {a}
+            {ACTIVITY_LABELS[a]}
           </li>
         ))}
       </ul>

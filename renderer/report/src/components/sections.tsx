@@ -1,18 +1,21 @@
 // The briefing's sections, in print order. Each section starts on a new page where it reads
-// better; figures and tables never break across pages (print.css).
+// better; figures and tables never break across pages (print.css). Every sentence and label a
+// client reads takes its phrasing from the client words (schedules/words): names people gave
+// things, plain words for changes, one citation per model, one sign for body-clock shifts.
 import type { ReactNode } from 'react';
-import type { BriefingDocument, CohortMetricRange } from '../briefing-document.js';
-import { cohortFromResults } from '../cohort-ranges.js';
-import type { ResultsView, ViewEnsembleModels } from '../../../src/results/view-model.js';
+import type { BriefingDocument } from '../briefing-document.js';
 import type { PersonaSummary, StrategyHeadline } from '../headlines.js';
 import type { ScenarioFacts } from '../scenario-facts.js';
-import type { ValidationRecordSummary } from '../validation-summary.js';
+import type { PlainValidation, ValidationRecordSummary } from '../validation-summary.js';
+import type { ReportModel } from '../report-models.js';
+import type { RunBasis } from '../../../../schedules/run/run-basis.js';
 import { RESULTS_CAUTIONS } from '../../../src/results/cautions.js';
 import { formatNumber } from '../../../src/charts/comparison-data.js';
-import { alignmentTag, directionOf } from '../../../../schedules/run/phase-words.js';
-import { EnsembleMethods } from './EnsembleMethods.js';
-import { MODELS, NOT_MODELLED, UNIT_NOTES } from '../methods-text.js';
+import { alignmentTag, directionOf, LIGHT_METHODS, measuredLightWords, PHASE_SHIFT_CONVENTION, PHASE_SHIFT_SIGN_LABEL, shiftInWords, weatherBasisSentence } from '../../../../schedules/words/index.js';
+import { NOT_MODELLED, UNIT_NOTES } from '../methods-text.js';
 import { TimelineDrawing } from './TimelineDrawing.js';
+
+export { CohortSection, RangesSection } from './RangesSection.js';
 
 export function Section({ id, title, children, newPage = true }: { id: string; title: string; children: ReactNode; newPage?: boolean }) {
   return (
@@ -58,9 +61,9 @@ export function Cover({ doc, facts }: { doc: BriefingDocument; facts: ScenarioFa
         <dt>Period</dt>
         <dd>{facts.period}</dd>
         <dt>Software</dt>
-        <dd>Zeitlight {doc.zeitlightVersion}</dd>
-        <dt>Scenario format</dt>
-        <dd>zeitlight-scenario version {facts.formatVersion}</dd>
+        <dd>
+          Zeitlight {doc.zeitlightVersion} (scenario file format version {facts.formatVersion})
+        </dd>
       </dl>
       {doc.synthetic === true && <p className="banner">Synthetic data for a layout check — not a simulation result.</p>}
       <p className="cover-footnote">Model estimates for planning and comparing lighting options — not diagnosis or treatment.</p>
@@ -68,26 +71,23 @@ export function Cover({ doc, facts }: { doc: BriefingDocument; facts: ScenarioFa
   );
 }
 
-/** A shift with + = earlier (advance) in words: "0.4 h earlier", "1.0 h later", "no shift". */
-export function shiftWords(advance_h: number | null): string {
-  if (advance_h === null) return '—';
-  if (Math.abs(advance_h) < 0.05) return 'no shift';
-  return `${formatNumber(Math.abs(advance_h), 1)} h ${advance_h > 0 ? 'earlier' : 'later'}`;
-}
 const percent = (v: number | null) => (v === null ? '—' : `${formatNumber(v, 0)} %`);
 
 function HeadlineTable({ summary }: { summary: PersonaSummary }) {
   const isRec = (h: StrategyHeadline) => h === summary.recommended;
   return (
-    <table className="data keep">
+    <table className="data keep headline-table">
       <thead>
         <tr>
-          {/* a wide first column keeps strategy names on few lines next to four number columns */}
-          <th style={{ width: '34%' }}>Strategy</th>
-          <th className="num">Body-clock shift vs baseline ({summary.phaseMarker})</th>
+          <th className="strategy-col">Strategy</th>
+          <th className="num">
+            Body-clock shift vs baseline
+            <br />
+            <span className="small">({PHASE_SHIFT_SIGN_LABEL})</span>
+          </th>
           <th className="num">Misalignment with work and sleep (h a day)</th>
           <th className="num">Melatonin suppression per night</th>
-          <th className="num">{summary.basis === 'work' ? 'Work hours' : 'Waking hours'} at KSS ≥ 7</th>
+          <th className="num">{summary.basis === 'work' ? 'Work hours' : 'Waking hours'} at KSS 7 or more</th>
         </tr>
       </thead>
       <tbody>
@@ -102,7 +102,7 @@ function HeadlineTable({ summary }: { summary: PersonaSummary }) {
                 'reference'
               ) : (
                 <>
-                  {shiftWords(h.phaseShift_h)}
+                  {shiftInWords(h.phaseShift_h)}
                   <br />
                   <span className="small">{alignmentTag(directionOf(h.alignment, summary.baseline?.alignment))}</span>
                 </>
@@ -118,9 +118,16 @@ function HeadlineTable({ summary }: { summary: PersonaSummary }) {
   );
 }
 
-export function Summary({ summaries, warnings }: { summaries: readonly PersonaSummary[]; warnings: readonly string[] }) {
+/** Notes of the run that the briefing does not show elsewhere (measured-log gaps have their own list). */
+export function otherNotes(warnings: readonly string[], basis: RunBasis | undefined): string[] {
+  const files = (basis?.measured_light ?? []).map((u) => u.file);
+  return warnings.filter((w) => !files.some((f) => w.startsWith(`${f} line `) && / gap from /.test(w)));
+}
+
+export function Summary({ summaries, warnings, basis, seatNotes = new Map() }: { summaries: readonly PersonaSummary[]; warnings: readonly string[]; basis?: RunBasis | undefined; seatNotes?: ReadonlyMap<string, string> }) {
+  const notes = otherNotes(warnings, basis);
   return (
-    <Section id="summary" title="Summary">
+    <Section id="summary" title="Summary and recommendation">
       <CautionsBox />
       {summaries.map((s) => (
         <div key={s.persona.id} className="persona-summary">
@@ -128,6 +135,7 @@ export function Summary({ summaries, warnings }: { summaries: readonly PersonaSu
             <h3>{s.persona.name}</h3>
             <p className="recommendation">{s.sentences.recommendation}</p>
             {s.sentences.reason !== '' && <p>{s.sentences.reason}</p>}
+            {seatNotes.has(s.persona.id) && <p className="seat-note">{seatNotes.get(s.persona.id)}</p>}
           </div>
           <ul className="headlines keep">
             <li>{s.sentences.phase}</li>
@@ -137,12 +145,17 @@ export function Summary({ summaries, warnings }: { summaries: readonly PersonaSu
           <HeadlineTable summary={s} />
         </div>
       ))}
-      <p className="small muted">How the recommendation is chosen: {summaries[0]?.rule ?? ''} A body-clock shift is judged by whether it moves the clock toward or away from alignment with the person’s work and sleep hours (misalignment: hours a day of work in the biological night, main sleep in the biological day and waking before the biological night is over; biological night from DLMO to 2 h after CBTmin).</p>
-      {warnings.length > 0 && (
+      <div className="keep">
+        <h4>How the recommendation is chosen</h4>
+        <p className="small muted">
+          {summaries[0]?.rule ?? ''} A body-clock shift counts as good or bad only by whether it moves the clock toward or away from alignment with the person’s work and sleep hours (misalignment: hours a day of work in the biological night, main sleep in the biological day and waking before the biological night is over; the biological night runs from the evening rise of melatonin to 2 h after the body’s temperature low).
+        </p>
+      </div>
+      {notes.length > 0 && (
         <div className="keep">
           <h4>Notes from the run</h4>
           <ul className="small">
-            {warnings.map((w) => (
+            {notes.map((w) => (
               <li key={w}>{w}</li>
             ))}
           </ul>
@@ -152,16 +165,45 @@ export function Summary({ summaries, warnings }: { summaries: readonly PersonaSu
   );
 }
 
-export function Modelled({ facts }: { facts: ScenarioFacts }) {
+/** What the results rest on: the weather source and, per person, the measured-light days and filled gaps. */
+export function RunBasisPart({ facts, basis, site }: { facts: ScenarioFacts; basis: RunBasis | undefined; site: { latitude_deg: number; longitude_deg: number } | null }) {
+  const measured = measuredLightWords(basis);
+  const names = new Map(facts.personas.map((p) => [p.id, p.name]));
   return (
-    <Section id="modelled" title="What was modelled">
+    <>
       <h3>Site and weather</h3>
       <p>{facts.siteLine}</p>
-      <p>
-        {facts.weatherLine} Simulated period: {facts.period}.
+      <p className={basis !== undefined && basis.weather.kind === 'weather-file' && !basis.weather.near_site ? 'warning' : undefined}>
+        {basis === undefined || site === null ? facts.weatherLine : weatherBasisSentence(basis.weather, site)} Simulated period: {facts.period}.
       </p>
+      {measured.length > 0 && (
+        <div className="keep measured-light">
+          <h3>Measured light</h3>
+          {measured.map((m) => (
+            <div key={m.personaId}>
+              <h4>{names.get(m.personaId) ?? 'A person of the scenario'}</h4>
+              <p className="small">{m.sentence}</p>
+              {m.gaps.length > 0 && (
+                <ul className="small">
+                  {m.gaps.map((g) => (
+                    <li key={g}>{g}</li>
+                  ))}
+                </ul>
+              )}
+            </div>
+          ))}
+        </div>
+      )}
+    </>
+  );
+}
+
+export function Modelled({ facts, basis, site }: { facts: ScenarioFacts; basis?: RunBasis | undefined; site?: { latitude_deg: number; longitude_deg: number } | null }) {
+  return (
+    <Section id="modelled" title="What was modelled">
+      <RunBasisPart facts={facts} basis={basis} site={site ?? null} />
       <h3>Places</h3>
-      <table className="data keep">
+      <table className="data keep places">
         <tbody>
           {facts.places.map((p) => (
             <tr key={p.name}>
@@ -172,6 +214,7 @@ export function Modelled({ facts }: { facts: ScenarioFacts }) {
         </tbody>
       </table>
       <h3>People and their routines</h3>
+      <p className="small muted">Each person’s first week, one row a day, coloured by what they are doing.</p>
       {facts.personas.map((p) => (
         <div key={p.id} className="keep persona-facts">
           <h4>{p.name}</h4>
@@ -198,164 +241,111 @@ export function Modelled({ facts }: { facts: ScenarioFacts }) {
   );
 }
 
-/** 5–95 % whisker, interquartile box and median tick on a scale shared by the rows of one person and metric. */
-function CohortBand({ r, lo, hi }: { r: CohortMetricRange; lo: number; hi: number }) {
-  const w = 120;
-  const x = (v: number) => (hi > lo ? 4 + ((v - lo) / (hi - lo)) * (w - 8) : w / 2);
-  if (r.p05 === null || r.p95 === null || r.median === null) return null;
-  const q25 = r.q25 ?? null;
-  const q75 = r.q75 ?? null;
-  return (
-    <svg className="cohort-band" width={w} height={12} viewBox={`0 0 ${w} 12`} role="img" aria-label={`${r.label}: 5–95 % ${formatNumber(r.p05, r.decimals)} to ${formatNumber(r.p95, r.decimals)} ${r.unit}`}>
-      <line x1={x(r.p05)} x2={x(r.p95)} y1={6} y2={6} stroke="#555" strokeWidth={1} />
-      {q25 !== null && q75 !== null && <rect x={x(q25)} y={2} width={Math.max(1, x(q75) - x(q25))} height={8} fill="#b9c9dd" stroke="#555" strokeWidth={0.6} />}
-      <line x1={x(r.median)} x2={x(r.median)} y1={1} y2={11} stroke="#111" strokeWidth={1.6} />
-    </svg>
-  );
-}
-
-export function CohortSection({ doc, view }: { doc: BriefingDocument; view: ResultsView }) {
-  const cohort = doc.cohort ?? cohortFromResults(doc.results);
-  if (cohort === undefined || cohort.ranges.length === 0) return null;
-  const name = (list: readonly { id: string; name: string }[], id: string) => list.find((x) => x.id === id)?.name ?? id;
-  const scale = new Map<string, { lo: number; hi: number }>();
-  for (const r of cohort.ranges) {
-    if (r.p05 === null || r.p95 === null) continue;
-    const k = `${r.personaId}\u0000${r.label}`;
-    const s = scale.get(k) ?? { lo: r.p05, hi: r.p95 };
-    scale.set(k, { lo: Math.min(s.lo, r.p05), hi: Math.max(s.hi, r.p95) });
-  }
-  const cell = (v: number | null | undefined, r: CohortMetricRange) => (v === undefined || v === null ? '—' : `${formatNumber(v, r.decimals)} ${r.unit}`);
-  return (
-    <Section id="cohort" title="Cohort: ranges across virtual occupants">
-      <p>
-        {cohort.occupants} virtual occupants were simulated per person, each under every strategy, with their own intrinsic period, light sensitivity and habitual sleep timing drawn around the persona{cohort.seed === null ? '' : ` (seed ${cohort.seed})`}. The table gives the median, the middle half (25th to 75th percentile, the box in the band) and the middle 90 % (5th to 95th percentile, the line); bands of one person and metric share a scale.
-      </p>
-      <table className="data breakable">
-        <thead>
-          <tr>
-            <th>Strategy</th>
-            <th>Metric</th>
-            <th className="num">5th pct.</th>
-            <th className="num">25th</th>
-            <th className="num">Median</th>
-            <th className="num">75th</th>
-            <th className="num">95th pct.</th>
-            <th>Band</th>
-          </tr>
-        </thead>
-        <tbody>
-          {cohort.ranges.map((r, i) => {
-            const s = scale.get(`${r.personaId}\u0000${r.label}`);
-            const first = i === 0 || cohort.ranges[i - 1]?.personaId !== r.personaId;
-            const newStrategy = first || cohort.ranges[i - 1]?.strategyId !== r.strategyId;
-            return [
-              first ? (
-                <tr key={`p${i}`}>
-                  <th colSpan={8}>{name(view.personas, r.personaId)}</th>
-                </tr>
-              ) : null,
-              <tr key={i}>
-                <td>{newStrategy ? name(view.strategies, r.strategyId) : ''}</td>
-                <td>{r.label}</td>
-                <td className="num">{cell(r.p05, r)}</td>
-                <td className="num">{cell(r.q25, r)}</td>
-                <td className="num">{cell(r.median, r)}</td>
-                <td className="num">{cell(r.q75, r)}</td>
-                <td className="num">{cell(r.p95, r)}</td>
-                <td>{s === undefined ? null : <CohortBand r={r} lo={s.lo} hi={s.hi} />}</td>
-              </tr>,
-            ];
-          })}
-        </tbody>
-      </table>
-    </Section>
-  );
-}
-
-export function Methods({ records, runModels, ensemble }: { records: readonly ValidationRecordSummary[]; runModels: Readonly<Record<string, string>> | null; ensemble?: ViewEnsembleModels | undefined }) {
+export function Methods({ models }: { models: readonly ReportModel[] }) {
   return (
     <Section id="methods" title="Methods and assumptions">
       <h3>Models</h3>
-      {runModels !== null && (
-        <p className="small">
-          Used in this run:{' '}
-          {Object.entries(runModels)
-            .map(([k, v]) => `${k.replace(/_/g, ' ')}: ${v}`)
-            .join('; ')}
-          .
-        </p>
-      )}
-      <table className="data keep small-table">
+      <p className="small">The figures in this briefing come from the models marked “figures”; the others are run on the same light at the eye to give the ranges across published models.</p>
+      <table className="data keep small-table models">
         <thead>
           <tr>
-            <th>What</th>
+            <th>Part</th>
             <th>Model</th>
-            <th>Reference</th>
-            <th>Native units</th>
+            <th>Used for</th>
+            <th>Published in</th>
           </tr>
         </thead>
         <tbody>
-          {MODELS.map((m) => (
-            <tr key={m.what}>
-              <td>{m.what}</td>
-              <td>{m.model}</td>
-              <td>{m.reference}</td>
-              <td>{m.units}</td>
+          {models.map((m) => (
+            <tr key={`${m.part}:${m.name}`}>
+              <td>{m.part}</td>
+              <td>{m.name}</td>
+              <td>{m.use === 'figures' ? 'figures' : 'range'}</td>
+              <td>{m.citation}</td>
             </tr>
           ))}
         </tbody>
       </table>
-      <EnsembleMethods ensemble={ensemble} />
-      <h3>Units and conversions</h3>
+      <h3>Light and thresholds</h3>
+      <table className="data keep small-table methods">
+        <thead>
+          <tr>
+            <th>Part</th>
+            <th>Method</th>
+            <th>Published in</th>
+          </tr>
+        </thead>
+        <tbody>
+          {LIGHT_METHODS.map((m) => (
+            <tr key={m.part}>
+              <td>{m.part}</td>
+              <td>{m.method}</td>
+              <td>{m.reference}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      <h3>Units and conventions</h3>
       <ul className="small keep">
         {UNIT_NOTES.map((n) => (
           <li key={n}>{n}</li>
         ))}
+        <li>{PHASE_SHIFT_CONVENTION}</li>
       </ul>
-      <h3>What the tool does not model</h3>
-      <ul className="small keep">
-        {NOT_MODELLED.map((n) => (
-          <li key={n}>{n}</li>
-        ))}
-      </ul>
-      <h3>Validation summary</h3>
-      <p className="small">
-        Every model is checked by the test suite against outside references (published standards, papers’ numbers, handbook formulas). {records.reduce((n, r) => n + r.checks, 0)} checks are recorded in {records.length} validation records; a few from each are quoted below as written in the record.
+    </Section>
+  );
+}
+
+/** One page in plain words: what the models were tested against and how close they came (docs/validation/summary.md). */
+export function Checked({ page, records }: { page: PlainValidation; records: readonly ValidationRecordSummary[] }) {
+  const total = records.reduce((n, r) => n + r.checks, 0);
+  return (
+    <Section id="checked" title="How these numbers were checked">
+      <p>
+        Each model was tested against published measurements or standards. The table gives the main tests in plain words; the full technical record of all {total} checks, with every source, tolerance and result, is kept with the software’s documentation.
       </p>
-      {records.map((r) => (
-        <div key={r.file} className="keep validation-record">
-          <h4>
-            {r.title} — {r.checks} checks
-          </h4>
-          <table className="data small-table validation">
-            <thead>
-              <tr>
-                <th>Check</th>
-                <th>Reference</th>
-                <th>Result</th>
-              </tr>
-            </thead>
-            <tbody>
-              {r.examples.map((e, i) => (
-                <tr key={i}>
-                  <td>{e.what}</td>
-                  <td>{e.source}</td>
-                  <td>{e.result}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
+      <table className="data keep small-table checked">
+        <thead>
+          <tr>
+            <th>What was checked</th>
+            <th>Against published data</th>
+            <th>How close</th>
+          </tr>
+        </thead>
+        <tbody>
+          {page.checks.map((c) => (
+            <tr key={c.what}>
+              <td>{c.what}</td>
+              <td>{c.against}</td>
+              <td>{c.close}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      {page.shortfalls.length > 0 && (
+        <div className="keep">
+          <h3>Where the models fall short</h3>
+          <ul className="small">
+            {page.shortfalls.map((s) => (
+              <li key={s}>{s}</li>
+            ))}
+          </ul>
         </div>
-      ))}
+      )}
     </Section>
   );
 }
 
 export function ClosingCautions() {
   return (
-    <Section id="cautions" title="Cautions" newPage={false}>
+    <Section id="cautions" title="Cautions">
       <CautionsBox title="Before acting on these results" />
+      <h3>What the models leave out</h3>
+      <ul className="small keep">
+        {NOT_MODELLED.map((n) => (
+          <li key={n}>{n}</li>
+        ))}
+      </ul>
       <p className="small muted">
         The numbers in this briefing are model estimates for a described scenario. They are meant for comparing lighting options with each other and with the baseline; they do not predict how any one person will respond.
       </p>
