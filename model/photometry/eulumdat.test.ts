@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { PhotometricFileError } from './candela-table.js';
+import { candelaAt_cd, expandCandelaTable } from './candela-grid.js';
 import { readEulumdat } from './eulumdat.js';
 
 /** An EULUMDAT text: Mc = 4 planes (C0, 90, 180, 270), γ 0/90, one lamp set of 2000 lm, LORL 80 %. */
@@ -34,8 +35,11 @@ describe('EULUMDAT reader', () => {
   it('stores the planes each symmetry indicator names', () => {
     expect(readEulumdat(ldt(0, [1, 0, 2, 0, 3, 0, 4, 0])).horizontal_deg).toEqual([0, 90, 180, 270]);
     expect(readEulumdat(ldt(2, [1, 0, 2, 0, 3, 0])).horizontal_deg).toEqual([0, 90, 180]);
+    // Isym 3 stores C270, C0, C90 (Mc1 = 3·Mc/4 + 1 to Mc1 + Mc/2); kept as their mirror images C270, C180, C90.
     const t3 = readEulumdat(ldt(3, [1, 0, 2, 0, 3, 0]));
-    expect([t3.symmetry, t3.horizontal_deg]).toEqual(['plane-C90-C270', [90, 180, 270]]);
+    expect([t3.symmetry, t3.horizontal_deg, t3.candela_cd.map((r) => r[0])]).toEqual(['plane-C90-C270', [90, 180, 270], [6, 4, 2]]);
+    const g3 = expandCandelaTable(t3);
+    expect([0, 90, 180, 270].map((c) => candelaAt_cd(g3, c, 0))).toEqual([4, 6, 4, 2]);
     expect(readEulumdat(ldt(4, [1, 0, 2, 0])).horizontal_deg).toEqual([0, 90]);
   });
 

@@ -22,7 +22,11 @@
  *   28 Mc C angles, 29 Ng γ angles, 30 intensities in cd per 1000 lm of lamp flux, plane by
  *      plane, γ ascending within a plane, for the planes Isym stores:
  *      Isym 0: all Mc planes; 1: one plane; 2: C0–C180 (Mc/2 + 1 planes);
- *      3: C90–C270 (Mc/2 + 1 planes); 4: C0–C90 (Mc/4 + 1 planes).
+ *      3: the planes Mc1 = 3·Mc/4 + 1 to Mc2 = Mc1 + Mc/2 (1-based, counted on past C360), i.e.
+ *      C270 through C0 to C90; 4: C0–C90 (Mc/4 + 1 planes).
+ *      Isym 3 planes are kept as their mirror images about the C90–C270 plane (C → 180 − C),
+ *      so the table holds C90–C270 like an LM-63 file with that symmetry; every direction has
+ *      the same intensity.
  * One value a line is the format; from field 27 on, values split across or joined on lines are
  * accepted. A decimal comma is read as a point (common practice in files from German sources).
  * Candela = value × lamp flux of the first set / 1000 × conversion factor; the stated luminaire
@@ -134,38 +138,40 @@ export function readEulumdat(text: string): CandelaTable {
   if (!((gAngles[0] as number) >= 0 && (gAngles[ng - 1] as number) <= 180)) throw new PhotometricFileError(gLines[0] ?? 0, 'γ angles', `must lie within 0–180° (got ${gAngles[0]}–${gAngles[ng - 1]})`);
   if (!((cAngles[0] as number) >= 0 && (cAngles[mc - 1] as number) < 360)) throw new PhotometricFileError(cLines[0] ?? 0, 'C angles', `must lie within 0–360° (360 excluded; got ${cAngles[0]}–${cAngles[mc - 1]})`);
 
-  // Planes stored for each Isym (index range into the C angles) and the angles they must span.
-  let first = 0;
-  let count = mc;
+  // Planes stored for each Isym (indices into the C angles, wrapping past C360) and the angles they must span.
+  let indices = cAngles.map((_, k) => k);
   let span: [number, number] | undefined;
-  if (isym === 1) count = 1;
-  else if (isym >= 2) {
-    const div = isym === 4 ? 4 : 2;
-    if (mc % (isym === 2 ? 2 : 4) !== 0) throw new PhotometricFileError(4, 'Mc (number of C planes)', `Isym ${isym} needs Mc divisible by ${isym === 2 ? 2 : 4} (got ${mc})`);
-    count = mc / div + 1;
-    first = isym === 3 ? mc / 4 : 0;
-    span = isym === 2 ? [0, 180] : isym === 3 ? [90, 270] : [0, 90];
+  if (isym >= 2) {
+    const div = isym === 2 ? 2 : 4;
+    if (mc % div !== 0) throw new PhotometricFileError(4, 'Mc (number of C planes)', `Isym ${isym} needs Mc divisible by ${div} (got ${mc})`);
+    const first = isym === 3 ? (3 * mc) / 4 : 0;
+    const count = isym === 4 ? mc / 4 + 1 : mc / 2 + 1;
+    indices = Array.from({ length: count }, (_, k) => (first + k) % mc);
+    span = isym === 2 ? [0, 180] : isym === 3 ? [270, 90] : [0, 90];
   }
-  const stored = isym === 1 ? [0] : cAngles.slice(first, first + count);
-  if (span !== undefined && (stored[0] !== span[0] || stored[stored.length - 1] !== span[1])) {
-    throw new PhotometricFileError(cLines[first] ?? 0, 'C angles', `Isym ${isym} stores the planes C${span[0]}–C${span[1]}, but the C angles give ${stored[0]}–${stored[stored.length - 1]}`);
+  const fileAngles = isym === 1 ? [0] : indices.map((k) => cAngles[k] as number);
+  if (span !== undefined && (fileAngles[0] !== span[0] || fileAngles[fileAngles.length - 1] !== span[1])) {
+    throw new PhotometricFileError(cLines[indices[0] as number] ?? 0, 'C angles', `Isym ${isym} stores the planes C${span[0]} to C${span[1]}, but the C angles give ${fileAngles[0]} to ${fileAngles[fileAngles.length - 1]}`);
   }
   if (isym === 0 && cAngles[0] !== 0) throw new PhotometricFileError(cLines[0] ?? 0, 'C angles', `the first C plane must be C0 (got ${cAngles[0]})`);
 
   const scale = (lampFlux / 1000) * conversion;
-  const candela: number[][] = [];
-  for (let j = 0; j < stored.length; j++) {
+  const rows: number[][] = [];
+  for (const c of fileAngles) {
     const row: number[] = [];
     for (let i = 0; i < ng; i++) {
-      const field = `intensity at C${stored[j]}, γ ${gAngles[i]}°`;
+      const field = `intensity at C${c}, γ ${gAngles[i]}°`;
       const t = take(field);
       if (t.value < 0) throw new PhotometricFileError(t.line, field, `must not be negative (got ${t.value})`);
       row.push(t.value * scale);
     }
-    candela.push(row);
+    rows.push(row);
   }
   const extra = tokens[ti];
-  if (extra !== undefined) throw new PhotometricFileError(extra.line, 'end of data', `unexpected value "${extra.text.slice(0, 40)}" after the last intensity (${stored.length} planes × ${ng} expected for Isym ${isym})`);
+  if (extra !== undefined) throw new PhotometricFileError(extra.line, 'end of data', `unexpected value "${extra.text.slice(0, 40)}" after the last intensity (${fileAngles.length} planes × ${ng} expected for Isym ${isym})`);
+  // Isym 3: C270 … C0 … C90 mirrored (C → 180 − C) to C270 … C180 … C90, then put in increasing order.
+  const stored = isym === 3 ? fileAngles.map((c) => (((180 - c) % 360) + 360) % 360).reverse() : fileAngles;
+  const candela = isym === 3 ? rows.reverse() : rows;
 
   return {
     format: 'EULUMDAT',

@@ -33,7 +33,7 @@ function ies({ edition, test, tilt, lamps = 1, lumens, multiplier = 1, type = 1,
 function ldt({ name, isym, mc, ng, dg, lampFlux, watts, gAngles, intensity }) {
   const dc = 360 / mc;
   const cAngles = steps(0, 360 - dc, dc);
-  const stored = isym === 0 ? cAngles : isym === 1 ? [0] : isym === 2 ? steps(0, 180, dc) : isym === 3 ? steps(90, 270, dc) : steps(0, 90, dc);
+  const stored = isym === 0 ? cAngles : isym === 1 ? [0] : isym === 2 ? steps(0, 180, dc) : isym === 3 ? [...steps(270, 360 - dc, dc), ...steps(0, 90, dc)] : steps(0, 90, dc);
   const lines = [
     'Zeitlight test corpus (invented, not a product)', isym === 1 ? '1' : '3', String(isym), String(mc), String(dc), String(ng), String(dg),
     'ZL-TEST', name, 'ZL-1', name.slice(0, 8), '2026-12-06 zeitlight',
