@@ -49,6 +49,11 @@ export interface CohortProgress {
   readonly overallCompleted: number;
   readonly overallTotal: number;
   readonly checkpoint: ConvergenceCheckpoint | null;
+  /**
+   * Every readout this outcome completed, in order: one outcome that fills a gap (an earlier
+   * occupant finishing after later ones) can complete several batches at once.
+   */
+  readonly newCheckpoints: readonly ConvergenceCheckpoint[];
   readonly workers: number;
 }
 
@@ -165,7 +170,7 @@ export function runCohortOnPool(
     overallCompleted += 1;
     const checkpoints = p.convergence.add(outcome);
     settle(p);
-    onProgress({ personaId: p.personaId, completed: p.completed, size: request.size, overallCompleted, overallTotal, checkpoint: checkpoints[checkpoints.length - 1] ?? null, workers });
+    onProgress({ personaId: p.personaId, completed: p.completed, size: request.size, overallCompleted, overallTotal, checkpoint: checkpoints[checkpoints.length - 1] ?? null, newCheckpoints: checkpoints, workers });
     dispatch(w);
   };
 

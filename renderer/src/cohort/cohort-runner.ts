@@ -67,8 +67,9 @@ export class CohortRunner {
       const s = this.state;
       if (s.status !== 'running' || this.current !== run) return;
       const before = s.personas[p.personaId];
-      if (p.checkpoint !== null && p.checkpoint !== before?.checkpoint) {
-        this.activity?.record('cohort-readout', { personaId: p.personaId, completed: p.completed, occupants: p.checkpoint.occupants, metrics: Object.keys(p.checkpoint.metrics).length, converged: p.checkpoint.converged });
+      // every readout in order, also when one outcome completes several batches at once
+      for (const checkpoint of p.newCheckpoints) {
+        this.activity?.record('cohort-readout', { personaId: p.personaId, completed: p.completed, occupants: checkpoint.occupants, metrics: Object.keys(checkpoint.metrics).length, converged: checkpoint.converged });
       }
       this.set({ ...s, completed: p.overallCompleted, personas: { ...s.personas, [p.personaId]: { completed: p.completed, size: p.size, checkpoint: p.checkpoint ?? before?.checkpoint ?? null } } });
     });
