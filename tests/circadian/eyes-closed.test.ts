@@ -108,7 +108,10 @@ describe('the demo\'s "Dark bedroom for day sleep" strategy', () => {
     // each source behind the eyelids: ≈ 0.3 % of the open-eye value
     for (let m = 0; m < baseline.eye.total_min; m += 37) {
       const open = baseline.eye.mel_edi_lx[m] ?? 0;
-      if (open > 1) expect((baseline.eye.melClosed_edi_lx[m] ?? 0) / open).toBeGreaterThan(0.0029), expect((baseline.eye.melClosed_edi_lx[m] ?? 0) / open).toBeLessThan(0.0035);
+      if (open > 1) {
+        expect((baseline.eye.melClosed_edi_lx[m] ?? 0) / open).toBeGreaterThan(0.0029);
+        expect((baseline.eye.melClosed_edi_lx[m] ?? 0) / open).toBeLessThan(0.0035);
+      }
     }
   });
 
