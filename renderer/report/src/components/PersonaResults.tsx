@@ -106,7 +106,7 @@ function MetricsTable({ view, personaId }: { view: ResultsView; personaId: strin
           <tr key={row.metricId}>
             <td>
               {row.label}
-              {row.unit === '' ? '' : ` (${row.unit})`}
+              {row.unit === '' || row.clock ? '' : ` (${row.unit})`}
             </td>
             {row.cells.map((c) => (
               <td key={c.strategyId} className={`num verdict-${c.verdict}`} {...(c.ensemble === undefined ? {} : { 'data-ensemble-min': c.ensemble.min, 'data-ensemble-max': c.ensemble.max })}>

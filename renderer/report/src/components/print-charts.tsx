@@ -13,6 +13,7 @@ import { BAND_COLOURS, OKABE_ITO, SOURCE_KIND_COLOURS, seriesColour, seriesDash 
 import { clockAxis, formatClock, formatDayLabel } from '../../../src/charts/clock.js';
 import { STEADY_CLOCK, type WallClock } from '../../../src/charts/wall-clock.js';
 import { formatLux, lightAxisTop_lx } from '../../../src/charts/light-scale.js';
+import { niceTicks } from '../../../src/charts/nice-ticks.js';
 
 export const CHART_WIDTH_PX = 660;
 const AXIS_INK = '#4a5563';
@@ -27,7 +28,8 @@ export function PrintLightChart({ run, day, title, axisTop_lx, clock = STEADY_CL
   const bands = recommendationBands(run.sleep, day, clock);
   const axis = clock.dayAxis(day);
   const auto = lightAxisTop_lx(rows.map((r) => r.total_lx));
-  const top = axisTop_lx ?? auto.top;
+  const yAxis = niceTicks(0, axisTop_lx ?? auto.top, 6);
+  const top = yAxis.domain[1];
   const cut = auto.peak > top;
   return (
     <figure className="chart">
@@ -38,7 +40,7 @@ export function PrintLightChart({ run, day, title, axisTop_lx, clock = STEADY_CL
           <ReferenceArea key={`a${i}`} x1={b.from_h} x2={b.to_h} fill={BAND_COLOURS[b.kind]} fillOpacity={b.kind === 'night' ? 0.07 : 0.06} ifOverflow="hidden" />
         ))}
         <XAxis dataKey="x_h" type="number" domain={axis.domain} ticks={axis.ticks} tick={TICK} tickFormatter={axis.labelOf} />
-        <YAxis tick={TICK} width={52} domain={[0, top]} allowDataOverflow label={{ value: 'melanopic EDI (lx)', angle: -90, position: 'insideLeft', style: { textAnchor: 'middle', fill: AXIS_INK, fontSize: 10 } }} />
+        <YAxis tick={TICK} width={52} domain={yAxis.domain} ticks={yAxis.ticks} tickFormatter={formatLux} allowDataOverflow label={{ value: 'melanopic EDI (lx)', angle: -90, position: 'insideLeft', style: { textAnchor: 'middle', fill: AXIS_INK, fontSize: 10 } }} />
         <Legend wrapperStyle={LEGEND_STYLE} iconSize={9} />
         {run.light.sources.map((s) => (
           <Area key={s.id} type="stepAfter" dataKey={s.id} name={s.label} stackId="light" stroke={SOURCE_KIND_COLOURS[s.kind]} fill={SOURCE_KIND_COLOURS[s.kind]} fillOpacity={0.55} isAnimationActive={false} dot={false} />
@@ -66,6 +68,11 @@ export function PrintPhaseChart({ view, runs, strategies, clock = STEADY_CLOCK }
         <CartesianGrid stroke={GRID} />
         <XAxis dataKey="day" tick={TICK} interval={stride - 1} tickFormatter={(d: number) => formatDayLabel(view.startDate, d)} />
         <YAxis reversed tick={TICK} width={52} domain={axis.domain} ticks={axis.ticks} tickFormatter={(h: number) => formatClock(h)} label={{ value: 'clock time (earlier ↑)', angle: -90, position: 'insideLeft', style: { textAnchor: 'middle', fill: AXIS_INK, fontSize: 10 } }} />
+        {Array.from({ length: view.days }, (_, d) => d)
+          .filter((d) => clock.changesIn(d).length > 0)
+          .map((d) => (
+            <ReferenceLine key={`change-${d}`} x={d} stroke={AXIS_INK} strokeDasharray="3 3" label={{ value: (clock.changesIn(d)[0]?.by_h ?? 0) > 0 ? 'clocks +1 h' : 'clocks −1 h', position: 'insideTopLeft', fill: AXIS_INK, fontSize: 9 }} />
+          ))}
         <Legend wrapperStyle={LEGEND_STYLE} iconSize={9} />
         {strategies.map((s, i) => (
           <Line key={s.id} dataKey={phaseKey(s.id, 'dlmo')} name={s.name} stroke={seriesColour(i)} strokeDasharray={seriesDash(i)} strokeWidth={1.8} dot={{ r: 2 }} connectNulls isAnimationActive={false} />
