@@ -1,11 +1,12 @@
 /**
  * Strategies: named overlays on the baseline scenario. Each change says what it alters —
- * a luminaire, the blinds, a screen, or the person's behaviour — so the comparison can list it.
+ * a luminaire, the blinds, a screen, the person's behaviour or roster — so the comparison can list it.
  */
 import { z } from 'zod';
 import { clockTimeSchema, fractionSchema, idSchema, nameSchema, weekdaySchema } from './primitives.js';
 import { blindsSchema, luminaireSchema, scheduleEntrySchema, screenSchema, spectrumRefSchema } from './places-schema.js';
 import { ACTIVITIES, GAZES, POSTURES, segmentSchema } from './personas-schema.js';
+import { rosterChangeSchema } from './roster-change-schema.js';
 
 const dayKindSchema = z.enum(['day', 'evening', 'night', 'rest']);
 
@@ -69,6 +70,7 @@ export const strategyChangeSchema = z.discriminatedUnion('op', [
     set: segmentPatchSchema,
     note: z.string().max(500).optional(),
   }),
+  rosterChangeSchema,
 ]);
 
 export const strategySchema = z

@@ -1,18 +1,20 @@
 /**
- * Strategies as overlays: applies a strategy's place, luminaire, blinds and screen changes to a
- * copy of the scenario. Behaviour changes (added or modified segments) are applied when timelines
- * are expanded. The plain-language description of each change is in schedules/words.
+ * Strategies as overlays: applies a strategy's place, luminaire, blinds, screen and roster
+ * changes to a copy of the scenario. Behaviour changes (added or modified segments) are applied
+ * when timelines are expanded. The plain-language description of each change is in schedules/words.
  */
 import type { Room, Scenario, Strategy } from '../schema/scenario-types.js';
+import { applyRosterChange } from './roster-change.js';
 
 function room(s: Scenario, id: string): Room | undefined {
   const p = s.places.find((x) => x.id === id);
   return p?.kind === 'room' ? p : undefined;
 }
 
-/** A copy of `baseline` with the strategy's changes to places and devices. The input is not modified. */
+/** A copy of `baseline` with the strategy's changes to places, devices and rosters. The input is not modified. */
 export function applyStrategyToPlaces(baseline: Scenario, strategy: Strategy): Scenario {
   const s = structuredClone(baseline);
+  const ownRosters = new Set<string>();
   for (const c of strategy.changes) {
     switch (c.op) {
       case 'set-luminaire': {
@@ -45,6 +47,9 @@ export function applyStrategyToPlaces(baseline: Scenario, strategy: Strategy): S
         else if (c.nightMode !== undefined) sc.nightMode = structuredClone(c.nightMode);
         break;
       }
+      case 'set-roster':
+        applyRosterChange(s, c, strategy.id, ownRosters);
+        break;
       case 'add-segment':
       case 'modify-segments':
         break;

@@ -19,6 +19,7 @@ import {
   weekdaysWords,
 } from './scenario-terms.js';
 import { anyScreenName, eyewearName, luminaireLabel, luminaireName, personName, placeName, screenName } from './scenario-names.js';
+import { rosterChangeText } from './roster-change-words.js';
 
 export type StrategyIn = NonNullable<ScenarioInput['strategies']>[number];
 export type StrategyChangeIn = StrategyIn['changes'][number];
@@ -94,6 +95,8 @@ export function changeWords(scenario: ScenarioInput, c: StrategyChangeIn): strin
     }
     case 'modify-segments':
       return sentence(`${personName(scenario, c.persona)} ${patchWords(scenario, c.persona, c.set)} ${matchWords(scenario, c.match)}`, c.note);
+    case 'set-roster':
+      return sentence(rosterChangeText(scenario, c), c.note);
   }
 }
 

@@ -5,6 +5,7 @@ import { WEEKDAYS } from '../../schema/primitives.js';
 import { problem, type PathPart, type ScenarioProblem } from '../problem.js';
 import { didYouMean } from '../suggest.js';
 import { parseDateTimeAtSite } from '../../timeline/expand-scenario.js';
+import { rosterChangeChecks } from './roster-change-checks.js';
 
 function duplicates<T extends { id: string }>(items: readonly T[], path: readonly PathPart[], what: string, out: ScenarioProblem[]): void {
   const seen = new Map<string, number>();
@@ -147,6 +148,7 @@ export function referenceChecks(s: Scenario, setAside: SetAsideIds = NONE): Scen
     st.personas?.forEach((id, k) => {
       if (!personas.has(id) && !setAside.personas.has(id)) out.push(problem('error', ['strategies', i, 'personas', k], `there is no persona "${id}"`, `Use one of: ${listIds(personas.keys())}.`));
     });
+    const rosterNow = new Map<string, string>();
     st.changes.forEach((c, k) => {
       const path: PathPart[] = ['strategies', i, 'changes', k];
       switch (c.op) {
@@ -202,6 +204,9 @@ export function referenceChecks(s: Scenario, setAside: SetAsideIds = NONE): Scen
           }
           break;
         }
+        case 'set-roster':
+          out.push(...rosterChangeChecks(s, c, path, rosterNow, setAside, checkPlace));
+          break;
       }
     });
   });
