@@ -73,6 +73,16 @@ describe('roster changes in the expanded timeline', () => {
     expect(activityAt(timelineOf(s, 'baseline'), 0, '19:30')).not.toBe('work');
   });
 
+  it('puts a person with a weekly routine on a roster', () => {
+    const s = withStrategy([{ op: 'set-roster', persona: 'desk-worker', roster: 'birch-rotation', offsetDays: 4 }]);
+    const strategy = s.strategies[0];
+    if (strategy === undefined) throw new Error('no strategy');
+    strategy.personas = ['desk-worker'];
+    const t = expandScenario(s).timelines.find((x) => x.personaId === 'desk-worker' && x.strategyId === 'roster-option');
+    expect(t?.days[0]?.dayKind).toBe('night');
+    expect(expandScenario(s).timelines.find((x) => x.personaId === 'desk-worker' && x.strategyId === 'baseline')?.days[0]?.dayKind).toBeNull();
+  });
+
   it('starts the persona at another day of the cycle', () => {
     const s = withStrategy([{ op: 'set-roster', persona: 'nurse', offsetDays: 4 }]);
     expect(timelineOf(s, 'roster-option').days[0]?.dayKind).toBe('night');
