@@ -17,6 +17,26 @@ function freshRosterId(s: Scenario, base: string): string {
   return id;
 }
 
+/** `source` with the change's cycle, shift and sleep edits (a new object; the source is not modified). */
+export function changedRoster(source: Roster, c: RosterChange): Roster {
+  const roster = structuredClone(source);
+  if (c.pattern !== undefined) roster.cycle = parseRosterPattern(c.pattern);
+  else if (c.cycle !== undefined) roster.cycle = [...c.cycle];
+  for (const patch of c.shifts ?? []) {
+    const sh = roster.shifts.find((x) => x.id === patch.shift);
+    if (sh === undefined) continue;
+    if (patch.start !== undefined) sh.start = patch.start;
+    if (patch.end !== undefined) sh.end = patch.end;
+    if (patch.kind !== undefined) sh.kind = patch.kind;
+    if (patch.place !== undefined) sh.place = patch.place;
+  }
+  if (c.sleep !== undefined) {
+    const rules = Object.fromEntries(Object.entries(c.sleep).filter(([, v]) => v !== undefined));
+    roster.sleep = { ...roster.sleep, ...rules };
+  }
+  return roster;
+}
+
 /**
  * Changes `s` in place (it is the strategy's own copy). `owned` holds the ids of roster copies
  * made for this strategy, so a second change for the same persona edits the same copy.
@@ -35,20 +55,7 @@ export function applyRosterChange(s: Scenario, c: RosterChange, strategyId: stri
     s.rosters.push(roster);
     owned.add(roster.id);
   }
-  if (c.pattern !== undefined) roster.cycle = parseRosterPattern(c.pattern);
-  else if (c.cycle !== undefined) roster.cycle = [...c.cycle];
-  for (const patch of c.shifts ?? []) {
-    const sh = roster.shifts.find((x) => x.id === patch.shift);
-    if (sh === undefined) continue;
-    if (patch.start !== undefined) sh.start = patch.start;
-    if (patch.end !== undefined) sh.end = patch.end;
-    if (patch.kind !== undefined) sh.kind = patch.kind;
-    if (patch.place !== undefined) sh.place = patch.place;
-  }
-  if (c.sleep !== undefined) {
-    const rules = Object.fromEntries(Object.entries(c.sleep).filter(([, v]) => v !== undefined));
-    roster.sleep = { ...roster.sleep, ...rules };
-  }
+  Object.assign(roster, changedRoster(roster, c), { id: roster.id });
   persona.roster = { roster: roster.id, offsetDays: c.offsetDays ?? persona.roster?.offsetDays ?? 0 };
   delete persona.week;
 }

@@ -60,6 +60,16 @@ describe('roster changes in strategies are validated like every other change', (
     expect(found.map((p) => p.path)).toEqual([`strategies[${at}].changes[0]`]);
   });
 
+  it('warns at the change about a quick return the change brings, not about those the roster had already', () => {
+    const { at } = withChanges([]);
+    const found = problemsOf([{ op: 'set-roster', persona: 'nurse', pattern: 'late early 5rest' }]);
+    // 11 h minimum daily rest: EU Working Time Directive 2003/88/EC, Art. 3. Late ends 22:30, early starts 06:45, 25 min commute each way.
+    expect(found).toEqual([
+      { path: `strategies[${at}].changes[0]`, message: 'with this change, only 7.4 h between the end of "late" and the start of "early" (commute included) (day 2 of the cycle)', severity: 'warning' },
+    ]);
+    expect(problemsOf([{ op: 'set-roster', persona: 'nurse', offsetDays: 3 }])).toEqual([]);
+  });
+
   it('refuses a misspelt field of a roster change at its path (schema)', () => {
     const { at } = withChanges([]);
     const found = problemsOf([{ op: 'set-roster', persona: 'nurse', sleep: { afterNights: 'split' } }]);

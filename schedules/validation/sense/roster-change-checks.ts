@@ -2,13 +2,16 @@
  * Sense checks for a strategy's roster change: the persona and roster exist, and the cycle,
  * pattern and shift changes name shifts of the roster the persona works after the change.
  * Changes of one strategy apply in order, so a later change is checked against the roster an
- * earlier one switched to.
+ * earlier one switched to. The changed roster gets the roster timing checks; warnings it did not
+ * have before the change are reported at the change.
  */
-import type { Place, Scenario, StrategyChange } from '../../schema/scenario-types.js';
+import type { Place, Roster, Scenario, StrategyChange } from '../../schema/scenario-types.js';
 import { REST_DAY } from '../../schema/roster-schema.js';
 import { parseRosterPattern, RosterPatternError } from '../../roster/roster-pattern.js';
 import { problem, type PathPart, type ScenarioProblem } from '../problem.js';
 import { didYouMean } from '../suggest.js';
+import { changedRoster } from '../../timeline/roster-change.js';
+import { rosterTimingChecks } from './timing-checks.js';
 import type { SetAsideIds } from './reference-checks.js';
 
 type RosterChange = Extract<StrategyChange, { op: 'set-roster' }>;
@@ -17,6 +20,14 @@ type CheckPlace = (id: string, path: readonly PathPart[], kinds?: readonly Place
 function listIds(ids: Iterable<string>): string {
   const all = [...ids];
   return all.length === 0 ? 'none defined' : all.map((s) => `"${s}"`).join(', ');
+}
+
+/** "day 4 of the cycle", "shift \"night\"": where in the changed roster a timing warning points (`cycle[3]`, `shifts[2].kind`). */
+function placeInRoster(path: string, roster: Roster): string {
+  const day = /^cycle\[(\d+)\]/.exec(path);
+  if (day !== null) return `day ${Number(day[1]) + 1} of the cycle`;
+  const shift = /^shifts\[(\d+)\]/.exec(path);
+  return shift === null ? 'the roster' : `shift "${roster.shifts[Number(shift[1])]?.id ?? ''}"`;
 }
 
 /**
@@ -65,6 +76,13 @@ export function rosterChangeChecks(s: Scenario, c: RosterChange, path: readonly 
     if (sh.place !== undefined) checkPlace(sh.place, [...path, 'shifts', j, 'place']);
   });
   if (c.sleep?.place !== undefined) checkPlace(c.sleep.place, [...path, 'sleep', 'place'], ['room']);
+  if (!out.some((p) => p.severity === 'error')) {
+    // Timing warnings the change brings (quick returns, shift kinds), not those the roster had already.
+    const before = new Set(rosterTimingChecks(target, []).map((p) => p.message));
+    for (const p of rosterTimingChecks(changedRoster(target, c), [])) {
+      if (!before.has(p.message)) out.push(problem('warning', path, `with this change, ${p.message} (${placeInRoster(p.path, target)})`, p.fix));
+    }
+  }
   const changes = [c.roster, c.offsetDays, c.cycle, c.pattern, c.shifts, c.sleep].filter((x) => x !== undefined);
   if (changes.length === 0) out.push(problem('warning', path, 'this change changes nothing', 'Give a roster, offsetDays, cycle or pattern, shifts or sleep rules.'));
   return out;

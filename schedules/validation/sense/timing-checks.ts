@@ -2,7 +2,7 @@
  * Sense checks of timing: day plans in order without overlaps, plausible daily sleep,
  * luminaire schedules without overlaps, roster shifts that match their kind and leave rest.
  */
-import type { Persona, Scenario, Segment } from '../../schema/scenario-types.js';
+import type { Persona, Roster, Scenario, Segment } from '../../schema/scenario-types.js';
 import { WEEKDAYS } from '../../schema/primitives.js';
 import { REST_DAY } from '../../schema/roster-schema.js';
 import { clockSpan, MINUTES_PER_DAY } from '../../time/clock-time.js';
@@ -12,6 +12,33 @@ import { problem, type PathPart, type ScenarioProblem } from '../problem.js';
 export const MIN_DAILY_REST_H = 11;
 const MIN_SLEEP_H = 4;
 const MAX_SLEEP_H = 12;
+
+/** Shifts that match their kind and leave the daily rest between them, for one roster at `path`. */
+export function rosterTimingChecks(r: Roster, path: readonly PathPart[]): ScenarioProblem[] {
+  const out: ScenarioProblem[] = [];
+  const shifts = new Map(r.shifts.map((sh) => [sh.id, sh]));
+  r.shifts.forEach((sh, k) => {
+    const { start_min, end_min } = clockSpan(sh.start, sh.end);
+    const crosses = end_min > MINUTES_PER_DAY;
+    if (sh.kind === 'night' && !crosses) out.push(problem('warning', [...path, 'shifts', k, 'kind'], `a night shift ${sh.start}–${sh.end} that does not run past midnight`, 'Check the times, or call it a day or evening shift.'));
+    if (sh.kind !== 'night' && crosses && end_min - MINUTES_PER_DAY > 60) out.push(problem('warning', [...path, 'shifts', k, 'kind'], `a ${sh.kind} shift ${sh.start}–${sh.end} that runs well past midnight`, 'Call it a night shift so sleep moves into the day.'));
+    if (end_min - start_min > 16 * 60) out.push(problem('warning', [...path, 'shifts', k, 'end'], `a shift of ${((end_min - start_min) / 60).toFixed(1)} h`, 'Check the times; shifts longer than 12–13 h are rare.'));
+  });
+  const commute = r.commute?.minutes ?? 0;
+  r.cycle.forEach((id, k) => {
+    const nextId = r.cycle[(k + 1) % r.cycle.length];
+    const a = shifts.get(id);
+    const b = nextId === undefined ? undefined : shifts.get(nextId);
+    if (id === REST_DAY || nextId === REST_DAY || a === undefined || b === undefined) return;
+    const aSpan = clockSpan(a.start, a.end);
+    const bSpan = clockSpan(b.start, b.end);
+    const rest_h = (bSpan.start_min + MINUTES_PER_DAY - commute - (aSpan.end_min + commute)) / 60;
+    if (rest_h < MIN_DAILY_REST_H) {
+      out.push(problem('warning', [...path, 'cycle', (k + 1) % r.cycle.length], `only ${rest_h.toFixed(1)} h between the end of "${id}" and the start of "${nextId}" (commute included)`, `Allow at least ${MIN_DAILY_REST_H} h of rest between shifts, e.g. put a rest day in between.`));
+    }
+  });
+  return out;
+}
 
 function isAsleep(seg: Segment): boolean {
   return seg.activity === 'sleep' || seg.activity === 'nap';
@@ -85,29 +112,7 @@ export function timingChecks(s: Scenario): ScenarioProblem[] {
       }
     });
   });
-  s.rosters.forEach((r, i) => {
-    const shifts = new Map(r.shifts.map((sh) => [sh.id, sh]));
-    r.shifts.forEach((sh, k) => {
-      const { start_min, end_min } = clockSpan(sh.start, sh.end);
-      const crosses = end_min > MINUTES_PER_DAY;
-      if (sh.kind === 'night' && !crosses) out.push(problem('warning', ['rosters', i, 'shifts', k, 'kind'], `a night shift ${sh.start}–${sh.end} that does not run past midnight`, 'Check the times, or call it a day or evening shift.'));
-      if (sh.kind !== 'night' && crosses && end_min - MINUTES_PER_DAY > 60) out.push(problem('warning', ['rosters', i, 'shifts', k, 'kind'], `a ${sh.kind} shift ${sh.start}–${sh.end} that runs well past midnight`, 'Call it a night shift so sleep moves into the day.'));
-      if (end_min - start_min > 16 * 60) out.push(problem('warning', ['rosters', i, 'shifts', k, 'end'], `a shift of ${((end_min - start_min) / 60).toFixed(1)} h`, 'Check the times; shifts longer than 12–13 h are rare.'));
-    });
-    const commute = r.commute?.minutes ?? 0;
-    r.cycle.forEach((id, k) => {
-      const nextId = r.cycle[(k + 1) % r.cycle.length];
-      const a = shifts.get(id);
-      const b = nextId === undefined ? undefined : shifts.get(nextId);
-      if (id === REST_DAY || nextId === REST_DAY || a === undefined || b === undefined) return;
-      const aSpan = clockSpan(a.start, a.end);
-      const bSpan = clockSpan(b.start, b.end);
-      const rest_h = (bSpan.start_min + MINUTES_PER_DAY - commute - (aSpan.end_min + commute)) / 60;
-      if (rest_h < MIN_DAILY_REST_H) {
-        out.push(problem('warning', ['rosters', i, 'cycle', (k + 1) % r.cycle.length], `only ${rest_h.toFixed(1)} h between the end of "${id}" and the start of "${nextId}" (commute included)`, `Allow at least ${MIN_DAILY_REST_H} h of rest between shifts, e.g. put a rest day in between.`));
-      }
-    });
-  });
+  s.rosters.forEach((r, i) => out.push(...rosterTimingChecks(r, ['rosters', i])));
   s.strategies.forEach((st, i) => {
     st.changes.forEach((c, k) => {
       if (c.op === 'modify-segments' && Object.keys(c.set).length === 0) out.push(problem('warning', ['strategies', i, 'changes', k, 'set'], 'this change sets nothing', 'Say what changes, e.g. { "eyewear": "amber" }.'));
