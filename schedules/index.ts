@@ -18,6 +18,7 @@ export { expandScenario, expandPersona, parseDateTimeAtSite } from './timeline/e
 export { applyStrategyToPlaces } from './timeline/apply-strategy.js';
 export { changeWords, strategyChangeWords } from './words/strategy-changes.js';
 export { rosterDay, type RosterDay } from './timeline/roster-plan.js';
+export { formatRosterPattern, parseRosterPattern, RosterPatternError } from './roster/roster-pattern.js';
 export { sliceAtMinute, sliceIndexPerMinute, dayAtMinute, utcAtMinute, wallClockAtMinute, forEachMinute } from './timeline/timeline-sampling.js';
 export {
   BASELINE_ID,
