@@ -41,6 +41,7 @@ export async function runCli(argv: readonly string[], io: Io): Promise<number> {
   const [name, ...rest] = argv;
   if (name === undefined || name === 'help' || name === '--help' || name === '-h') {
     io.stdout(helpText());
+    if (name === undefined) io.stderr('zeitlight: expected a command (the commands are listed above), e.g. zeitlight demo --out demo\n');
     return name === undefined ? 2 : 0;
   }
   if (name === '--version' || name === 'version') {

@@ -18,6 +18,9 @@ import { applyTransmittance, type Spectrum } from '../../model/photometry/spectr
 import { filterTransmittance } from '../../model/sources/filters.js';
 import { sourceInfo, sourceSpectrum } from '../../model/sources/source-library.js';
 
+/** Range of --illuminance, lx: from far below starlight to ten times full sunlight (about 100 klx; common practice). */
+const MIN_ILLUMINANCE_LX = 1e-9;
+const MAX_ILLUMINANCE_LX = 1e6;
 /** Built-in spectra are relative; without --illuminance they are shown at this illuminance. */
 const DEFAULT_SOURCE_ILLUMINANCE_LX = 100;
 /** Beyond this |Duv| a CCT says little about the colour (CIE 015 guidance, limit 5e-2 from memory). */
@@ -87,6 +90,7 @@ export const alphaopicCommand: Command = {
 
     const illuminance = numberOption(ctx, 'illuminance');
     if (illuminance !== undefined && !(illuminance > 0)) throw new UsageError(`--illuminance must be greater than 0 lx (got ${illuminance}); a spectrum cannot be scaled to zero or negative illuminance`);
+    if (illuminance !== undefined && (illuminance > MAX_ILLUMINANCE_LX || illuminance < MIN_ILLUMINANCE_LX)) throw new UsageError(`--illuminance must be from ${MIN_ILLUMINANCE_LX} to ${MAX_ILLUMINANCE_LX} lx (got ${illuminance}); full sunlight is about 100 000 lx`);
     const age = numberOption(ctx, 'age');
     if (age !== undefined && !(age >= LENS_AGE_MIN_YEARS && age <= LENS_AGE_MAX_YEARS)) throw new UsageError(`--age must be between ${LENS_AGE_MIN_YEARS} and ${LENS_AGE_MAX_YEARS} years (got ${age})`);
     const filterId = stringOption(ctx, 'filter');
@@ -125,8 +129,8 @@ export const alphaopicCommand: Command = {
       input: input.info,
       illuminance_lx: q.illuminance_lx,
       alpha_opic: q.alpha_opic,
-      cct_K: c.cct_K,
-      duv: c.duv,
+      cct_K: Number.isFinite(c.cct_K) ? c.cct_K : null,
+      duv: Number.isFinite(c.duv) ? c.duv : null,
       x: xy.x,
       y: xy.y,
       age_years: age ?? REFERENCE_OBSERVER_AGE_YEARS,

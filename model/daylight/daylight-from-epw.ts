@@ -10,6 +10,7 @@
  */
 import { sunPositionsEvery } from '../sun/sun-track.js';
 import type { EpwFile } from '../weather/epw.js';
+import { EPW_HEADER_LINES } from '../weather/epw-fields.js';
 import { epwDayIndex, epwRecordIndexAt } from '../weather/epw-time.js';
 import { clearSkyIrradiance } from './clear-sky.js';
 import { cloudGlobalFactor } from './decomposition.js';
@@ -71,7 +72,7 @@ export function daylightFromEpw(file: EpwFile, window: SampleWindow, options: Ep
     const r = epwRecordIndexAt(file, dayIndex, hourEnd);
     if (r < 0) {
       const d = new Date(hourEnd - 1 + tzMs);
-      throw new RangeError(`${file.fileName}: the weather file (${file.period.start} – ${file.period.end}) has no data for ${d.getUTCMonth() + 1}/${d.getUTCDate()}, which the time span needs`);
+      throw new RangeError(`${file.fileName}, line ${EPW_HEADER_LINES}: the weather file's DATA PERIODS (${file.period.start} – ${file.period.end}) hold no data for ${d.getUTCMonth() + 1}/${d.getUTCDate()}, which the time span needs`);
     }
     const v = file.values;
     const dew = Number.isFinite(v.dewPoint_C[r] as number) ? (v.dewPoint_C[r] as number) : 10;

@@ -47,6 +47,15 @@ const NUMBER = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
  */
 export const NEGATIVE_NOISE_SHARE = 0.02;
 
+/**
+ * Largest value accepted, W·m⁻²·nm⁻¹ (or counts of a relative spectrum). Sunlight at the ground
+ * peaks near 2 W·m⁻²·nm⁻¹; raw spectrometer counts stay below 10⁷. A larger value is a unit or
+ * column mistake, and would overflow the integrals.
+ */
+export const MAX_SPECTRAL_VALUE = 1e9;
+/** Smallest peak value accepted: below it, integrals and scaling lose all precision (a unit mistake). */
+export const MIN_SPECTRAL_PEAK = 1e-30;
+
 function parseCell(raw: string, decimalComma: boolean): number {
   const text = decimalComma ? raw.replace(',', '.') : raw;
   return NUMBER.test(text) ? Number(text) : Number.NaN;
@@ -129,6 +138,7 @@ export function parseSpdCsv(text: string, fileLabel: string, options: SpdCsvOpti
     const v = parseCell(cells[valueIndex] as string, decimalComma);
     if (!Number.isFinite(v)) fail(`, line ${lineNo}, column "${valueName}"`, `"${cells[valueIndex]}" is not a number`);
     const prev = wavelengths[wavelengths.length - 1];
+    if (Math.abs(v) > MAX_SPECTRAL_VALUE) fail(`, line ${lineNo}, column "${valueName}"`, `value ${v} is beyond any light source (sunlight peaks near 2 W·m⁻²·nm⁻¹); check the unit and the column`);
     if (prev !== undefined && w === prev) fail(`, line ${lineNo}`, `wavelength ${w} nm repeats line ${previousLine}; each wavelength may appear once`);
     if (prev !== undefined && w < prev) fail(`, line ${lineNo}`, `wavelength ${w} nm comes after ${prev} nm (line ${previousLine}); wavelengths must increase from row to row`);
     if (w <= 0) fail(`, line ${lineNo}, column "${header[0]}"`, `wavelength ${w} nm must be positive`);
@@ -139,7 +149,10 @@ export function parseSpdCsv(text: string, fileLabel: string, options: SpdCsvOpti
   });
 
   if (header === undefined) fail('', 'the file is empty (no header row and no data)');
-  if (wavelengths.length < 2) fail('', `needs at least two data rows after the header, found ${wavelengths.length}`);
+  if (wavelengths.length < 2) fail(`, line ${headerIndex + 1}`, `needs at least two data rows after this header, found ${wavelengths.length}`);
+  const peakAt = values.reduce((best, v, i) => (v > (values[best] ?? 0) ? i : best), 0);
+  const peak = values[peakAt] ?? 0;
+  if (peak > 0 && peak < MIN_SPECTRAL_PEAK) fail(`, line ${lineOf[peakAt] ?? 0}, column "${valueName}"`, `the largest value is ${peak}, too small to compute with; check the unit and the column`);
   const clipped = clipNoise(values, lineOf, wavelengths, (line, v, limit) =>
     fail(`, line ${line}, column "${valueName}"`, `negative value ${v}; spectral irradiance cannot be negative, and this is more than measurement noise (below ${limit}, ${NEGATIVE_NOISE_SHARE * 100} % of the peak)`),
   );
@@ -149,7 +162,7 @@ export function parseSpdCsv(text: string, fileLabel: string, options: SpdCsvOpti
   const from = wavelengths[0] as number;
   const to = wavelengths[wavelengths.length - 1] as number;
   if (to < GRID_START_NM || from > GRID_END_NM) {
-    fail('', `the data cover ${from}–${to} nm, which does not overlap ${GRID_START_NM}–${GRID_END_NM} nm; is the first column the wavelength in nm?`);
+    fail(`, lines ${lineOf[0] ?? 0}–${lineOf[lineOf.length - 1] ?? 0}, column "${header?.[0] ?? ''}"`, `the data cover ${from}–${to} nm, which does not overlap ${GRID_START_NM}–${GRID_END_NM} nm; is the first column the wavelength in nm?`);
   }
   if (from > GRID_START_NM || to < GRID_END_NM) {
     const a = Math.max(from, GRID_START_NM);

@@ -119,7 +119,7 @@ function parseLocation(fileName: string, cells: string[]): EpwLocation {
 
 /** Parses EPW text. `fileName` only labels messages. Throws EpwError on structural faults. */
 export function parseEpw(text: string, fileName = 'weather file'): EpwFile {
-  const lines = text.split(/\r?\n/);
+  const lines = text.split(/\r\n|\r|\n/);
   while (lines.length > 0 && (lines[lines.length - 1] ?? '').trim() === '') lines.pop();
   if (lines.length < EPW_HEADER_LINES) throw new EpwError(fileName, lines.length, `file ends inside the ${EPW_HEADER_LINES}-line header`);
   const location = parseLocation(fileName, splitCsvLine(lines[0] ?? ''));

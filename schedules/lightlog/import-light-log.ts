@@ -61,6 +61,12 @@ export type LightLogOptions = Pick<LightLogSpec, 'quantity' | 'timestampColumn' 
   readonly timeZone: string;
 };
 
+/**
+ * Readings above this (lx, photopic or melanopic EDI) are not light at an eye: direct sunlight
+ * gives about 100–130 klx (common practice); such a row is skipped as unreadable.
+ */
+export const MAX_READING_LX = 200_000;
+
 /** Rows worse than this share make the file "not a light log". */
 const MAX_BAD_ROW_SHARE = 0.5;
 const MAX_LISTED_ROW_PROBLEMS = 20;
@@ -197,10 +203,12 @@ export function importLightLog(text: string, options: LightLogOptions): LightLog
       const dot = (k: readonly number[]) => Math.max(0, values.reduce((acc, v, i) => acc + v * (k[i] ?? 0), 0));
       l = dot(q.calibration.photopic_lx);
       m = dot(q.calibration.melanopicEdi_lx);
-      if (!Number.isFinite(l) || !Number.isFinite(m)) {
-        rowProblem(r.line, null, 'the calibration gives a light level too large to hold', 'The line is skipped; check the calibration coefficients.');
-        return;
-      }
+    }
+    const level = Math.max(Number.isNaN(l) ? 0 : l, Number.isNaN(m) ? 0 : m);
+    if (!(level <= MAX_READING_LX)) {
+      const col = q.kind === 'channels' ? null : (c.valueCols[0]?.name ?? null);
+      rowProblem(r.line, col, `${Number.isFinite(level) ? Math.round(level) : 'an endless'} lx${q.kind === 'channels' ? ' (after the calibration)' : ''} is brighter than any light at an eye (direct sunlight is about 100 000 lx; at most ${MAX_READING_LX} lx are read)`, q.kind === 'channels' ? 'The line is skipped; check the calibration coefficients.' : 'The line is skipped; check the unit of the column.');
+      return;
     }
     utc.push(t);
     lux.push(l);

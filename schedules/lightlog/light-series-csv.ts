@@ -16,7 +16,7 @@
  */
 import { DateTime, FixedOffsetZone } from 'luxon';
 import { readCsvTable, readNumber, rowText, type CsvTable } from './csv-table.js';
-import { importLightLog, type LogProblem } from './import-light-log.js';
+import { importLightLog, MAX_READING_LX, type LogProblem } from './import-light-log.js';
 
 export type SeriesUnit = 'native_lx' | 'mel_edi_lx';
 
@@ -75,6 +75,10 @@ function readHours(table: CsvTable, file: string): LightSeriesCsv {
       skipped.push(`${file}, line ${r.line}: ${valueName} "${(r.cells[1] ?? '').trim().slice(0, 20)}" is not a light level (a number ≥ 0); the line is skipped`);
       continue;
     }
+    if (value > MAX_READING_LX) {
+      skipped.push(`${file}, line ${r.line}: ${valueName} ${value} is brighter than any light at an eye (at most ${MAX_READING_LX} lx are read); the line is skipped`);
+      continue;
+    }
     if (previous === undefined && hour !== 0) throw new LightSeriesCsvError(`${file}, line ${r.line}: the first hour must be 0 (local midnight of day 0), got ${hour}`);
     if (previous !== undefined && !(hour > previous.hour)) throw new LightSeriesCsvError(`${file}, line ${r.line}: hour ${hour} is not after the previous row (hour ${previous.hour}, line ${previous.line})`);
     previous = { hour, line: r.line };
@@ -83,6 +87,7 @@ function readHours(table: CsvTable, file: string): LightSeriesCsv {
     level.push(value);
   }
   const readable = body.length - skipped.length;
+  if (body.length === 0) throw new LightSeriesCsvError(`${file}, line ${header.line}: no readings after the header`);
   if (readable === 0 || skipped.length > readable) {
     const listed = skipped.slice(0, 3).join('; ');
     throw new LightSeriesCsvError(`${file}: only ${readable} of ${body.length} data line(s) hold a readable hour and light level${listed !== '' ? ` (${listed}${skipped.length > 3 ? '; …' : ''})` : ''}`);

@@ -58,6 +58,6 @@ describe('per-minute daylight from a partial-year EPW file', () => {
     head[7] = (head[7] ?? '').replace('12/31', ' 1/31');
     const januaryOnly = parseEpw([...head, ...lines.slice(8, 8 + 31 * 24)].join('\n'), 'january.epw');
     expect(januaryOnly.count).toBe(744);
-    expect(() => daylightFromEpw(januaryOnly, { startEpochMs: Date.UTC(2025, 2, 3), step_min: 1, count: 60 })).toThrow(/january\.epw: .*no data for 3\/3/);
+    expect(() => daylightFromEpw(januaryOnly, { startEpochMs: Date.UTC(2025, 2, 3), step_min: 1, count: 60 })).toThrow(/january\.epw, line 8: .*no data for 3\/3/);
   });
 });

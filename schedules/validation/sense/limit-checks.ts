@@ -19,6 +19,8 @@ export const SCENARIO_LIMITS = {
   lightLogs: 10,
   /** Σ over people of (1 + the strategies that apply to them) × days. */
   personStrategyDays: 600,
+  /** Luminaires in one room (each up to 100 000 lx at the eye; the body-clock models are solved for up to about 10⁸ lx). */
+  luminairesPerRoom: 50,
 } as const;
 
 /** Σ over people of (1 + the strategies that apply to them) × days: the runs the scenario asks for, in days. */
@@ -40,6 +42,11 @@ export function limitChecks(s: Scenario): ScenarioProblem[] {
   count('strategies', 'strategies', 'Compare fewer strategies at a time.');
   count('rosters', 'rosters', 'Remove rosters nobody uses, or split the scenario.');
   count('lightLogs', 'light logs', 'Split the people with measured light over several scenarios.');
+  s.places.forEach((p, i) => {
+    if (p.kind === 'room' && p.luminaires.length > SCENARIO_LIMITS.luminairesPerRoom) {
+      out.push(problem('error', ['places', i, 'luminaires'], `${p.luminaires.length} luminaires in one room; a room holds at most ${SCENARIO_LIMITS.luminairesPerRoom}`, 'Describe groups of luminaires that are switched together as one luminaire with their summed illuminance at the eye.'));
+    }
+  });
   const psd = personStrategyDays(s);
   if (psd > SCENARIO_LIMITS.personStrategyDays) {
     out.push(
