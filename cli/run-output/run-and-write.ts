@@ -9,6 +9,7 @@ import type { CommandContext } from '../command.js';
 import { CliError } from '../cli-error.js';
 import type { Scenario } from '../../schedules/index.js';
 import { exposureCsv, runScenario, RunInputError, summaryCsv, withEnsemble, type RunInput, type RunResults } from '../../schedules/run/index.js';
+import { seatComparisons } from '../../schedules/words/seat-comparison.js';
 import { ensembleLines, ensembleModelsLine } from './ensemble-lines.js';
 import { beginOutput, type StagedOutput } from './output-folder.js';
 import { writeBriefing } from './briefing-pdf.js';
@@ -93,8 +94,10 @@ async function runInto(ctx: CommandContext, o: RunAndWriteOptions, output: Stage
   if (ctx.json) printJson(ctx, out.results);
   else {
     const lines = [`Ran "${out.results.scenario.name}": ${out.results.personas.length} person(s), ${out.results.scenario.days} days, in ${(compute_ms / 1000).toFixed(2)} s${o.ensemble ? ` (model ensemble ${(ensemble_ms / 1000).toFixed(2)} s)` : ''}.`];
+    const seats = seatComparisons(o.input.scenario, out.results);
     for (const p of out.results.personas) {
       lines.push('', `${p.name} — recommended: ${p.recommendation.strategy_name}`, `  ${p.recommendation.reason}`);
+      for (const c of seats) if (c.personaIds[c.personaIds.length - 1] === p.id) lines.push(`  ${c.sentence}`);
       const rec = p.strategies.find((s) => s.id === p.recommendation.strategy_id);
       for (const h of rec?.headlines ?? []) lines.push(`  • ${h.sentence}`);
       lines.push(...ensembleLines(out.results, p));

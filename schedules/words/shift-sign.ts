@@ -5,6 +5,7 @@
  * earlier (an advance). Numbers carry their sign ("+1.45", "−0.66"); words say "later" or
  * "earlier".
  */
+import { SAME_TIMING_H } from '../run/phase-words.js';
 
 /** The convention, stated once wherever shifts are printed. */
 export const PHASE_SHIFT_CONVENTION = 'Body-clock shifts are given in hours against the baseline: + means later (a delay), − means earlier (an advance).';
@@ -20,10 +21,10 @@ export function signedShift(later_h: number, decimals = 2): string {
   return /^0(\.0*)?$/.test(text) ? text : `+${text}`;
 }
 
-/** "1.5 h later", "0.7 h earlier", "no shift" (below 0.05 h): a shift in words at one decimal. */
+/** "1.5 h later", "0.7 h earlier", or "no shift" below 5 min, where the shift sentences say "about the same timing" (phase-words.ts): a shift in words at one decimal. */
 export function shiftInWords(later_h: number | null): string {
   if (later_h === null) return '—';
-  if (Math.abs(later_h) < 0.05) return 'no shift';
+  if (Math.abs(later_h) < SAME_TIMING_H) return 'no shift';
   return `${Math.abs(later_h).toFixed(1)} h ${later_h > 0 ? 'later' : 'earlier'}`;
 }
 

@@ -1,6 +1,10 @@
 // The client briefing read back from its PDF with poppler-utils (an outside reader): sections in
 // order, the summary's numbers, cautions on the summary page and at the end, page count, every page
-// drawn, fonts embedded, paper sizes, repeatable text, and a clear message without Chromium.
+// drawn, fonts embedded, paper sizes, repeatable text, and a clear message without Chromium; and
+// what makes it a briefing a consultant can hand over as it is: no internal code, one sign for a
+// body-clock shift wherever it is printed, one citation per model, no page left mostly blank
+// except where a section ends, document information naming the scenario and the product, the
+// numbers of results.json as printed, and the two desks of the demo office compared.
 // Results: the run pipeline on the built-in demo scenario (the same results.json `zeitlight demo`
 // writes); a second briefing from the renderer's synthetic layout view checks the view path.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -11,16 +15,31 @@ import { build } from 'vite';
 import { writeBriefingPdf } from '../../cli/report/write-briefing-pdf.js';
 import { DEMO_SCENARIO } from '../../schedules/demo/demo-scenario.js';
 import { validateScenarioValue } from '../../schedules/validation/validate-scenario.js';
-import { runScenario } from '../../schedules/run/run-scenario.js';
+import { runScenario, type RunOutput } from '../../schedules/run/run-scenario.js';
+import type { Scenario } from '../../schedules/schema/scenario-types.js';
 import { withEnsemble } from '../../schedules/run/ensemble.js';
 import type { RunResults } from '../../schedules/run/results-types.js';
 import { demoSyntheticView } from './synthetic-briefing.js';
-import { pageVariances, pdfFonts, pdfImageCount, pdfInfo, pdfText } from './pdf-tools.js';
+import { pageFills, pageVariances, pdfFonts, pdfImageCount, pdfInfo, pdfText } from './pdf-tools.js';
+import Papa from 'papaparse';
+import { summaryCsv } from '../../schedules/run/results-csv.js';
+import { ensembleLines } from '../../cli/run-output/ensemble-lines.js';
+import { VERSION } from '../../cli/version.js';
+import { viewFromRun } from '../../renderer/src/results/results-adapter.js';
+import { comparisonRows, formatMetricDifference, formatMetricValue } from '../../renderer/src/charts/comparison-data.js';
+import { headlineText } from '../../renderer/src/views/summary-text.js';
+import { viewFromResults } from '../../renderer/report/src/results-view.js';
+import { reportModels } from '../../renderer/report/src/report-models.js';
+import { PAPERS } from '../../model/circadian/model-citations.js';
+import { directionOfShift, PHASE_SHIFT_CONVENTION, signedShift } from '../../schedules/words/shift-sign.js';
+import { internalCodesIn } from './client-text-checks.js';
 
 const ROOT = path.resolve(import.meta.dirname, '..', '..');
 const work = mkdtempSync(path.join(tmpdir(), 'zeitlight-briefing-test-'));
 const pageFolder = path.join(work, 'page');
 let results: RunResults;
+let out: RunOutput;
+let scenario: Scenario;
 const common = { scenario: DEMO_SCENARIO, generatedOn: '2026-12-01', reportFolder: pageFolder } as const;
 const a4 = path.join(work, 'a.pdf');
 const synthetic = path.join(work, 'synthetic.pdf');
@@ -34,7 +53,9 @@ beforeAll(async () => {
   if (validated.scenario === undefined) throw new Error('demo scenario does not validate');
   // through JSON, exactly as results.json is read back
   // with the model ensemble, as `zeitlight demo` runs it by default
-  results = JSON.parse(JSON.stringify(withEnsemble(runScenario({ scenario: validated.scenario })))) as RunResults;
+  scenario = validated.scenario;
+  out = runScenario({ scenario });
+  results = JSON.parse(JSON.stringify(withEnsemble(out))) as RunResults;
   await writeBriefingPdf({ ...common, results, outPath: a4, paper: 'A4' });
   await writeBriefingPdf({ ...common, results, outPath: a4Again, paper: 'A4' });
   await writeBriefingPdf({ ...common, results, outPath: letter, paper: 'Letter' });
@@ -173,5 +194,129 @@ describe('briefing PDF without Chromium', () => {
     await expect(attempt).rejects.toThrow(/apt-get install chromium.*ZEITLIGHT_CHROMIUM/);
     expect(existsSync(out)).toBe(false);
     expect(readdirSync(work).filter((f) => f.includes('partial'))).toEqual([]);
+  });
+});
+
+describe('briefing PDF ready to hand over', () => {
+  /** The whole text with line breaks and runs of spaces as single spaces (pdftotext's reading order). */
+  const flat = () => pdfText(a4).replace(/\s+/g, ' ');
+
+  it('holds no internal code: no id of the scenario, value of the scenario format, model id or repository path', () => {
+    expect(internalCodesIn(pdfText(a4), DEMO_SCENARIO)).toEqual([]);
+    expect(internalCodesIn(flat(), DEMO_SCENARIO)).toEqual([]);
+  });
+
+  it('gives one body-clock shift the same sign in results.json, summary.csv, the command line, the app and the briefing (+ later)', () => {
+    const nurse = results.personas.find((p) => p.id === 'nurse');
+    const s = nurse?.strategies.find((x) => x.id === 'ward-bright-night-start');
+    const shift = s?.summary.mean_phase_shift_h ?? NaN;
+    expect(shift).toBeGreaterThan(0.5);
+    const signs = new Map<string, 'later' | 'earlier' | null>();
+    signs.set('results.json', shift > 0 ? 'later' : 'earlier');
+    const csv = Papa.parse<Record<string, string>>(summaryCsv(results), { header: true, skipEmptyLines: true }).data.find((r) => r['persona_id'] === 'nurse' && r['strategy_id'] === 'ward-bright-night-start');
+    signs.set('summary.csv', Number(csv?.['mean_phase_shift_h']) > 0 ? 'later' : 'earlier');
+    // the line `zeitlight run` prints for the strategy: "phase shift (+ later) +1.45 h (models: …)"
+    const cli = ensembleLines(results, nurse!).find((l) => l.includes(s!.name)) ?? '';
+    signs.set('command line', directionOfShift(/phase shift \(\+ later\) (\S+)/.exec(cli)?.[1] ?? ''));
+    // the app: the Compare view's cell and reading, and the Summary view's headline words
+    const view = viewFromRun(out, scenario);
+    const row = comparisonRows(view.runs.filter((r) => r.personaId === 'nurse'), view.strategies, view.baselineId).find((r) => r.metricId === 'phase-shift');
+    const cell = row?.cells.find((c) => c.strategyId === 'ward-bright-night-start');
+    signs.set('app, Compare difference', directionOfShift(formatMetricDifference(row!, cell!.difference!)));
+    signs.set('app, Compare reading', directionOfShift(cell!.reading));
+    signs.set('app, Summary', directionOfShift(headlineText('phase_shift_h', cell!.value, false)));
+    // the briefing: the summary table, the person's metrics table and the ranges across models
+    const text = pdfText(a4);
+    const summaryRow = sectionText(a4, 'Summary and recommendation', 'What was modelled').split('\n').find((l) => l.trim().startsWith('Bright light early')) ?? '';
+    signs.set('briefing, summary table', directionOfShift(/\d\.\d h (later|earlier)/.exec(summaryRow)?.[0] ?? ''));
+    const metricsRow = sectionText(a4, `Results: ${nurse!.name}`, `Results: ${results.personas[1]!.name}`).split('\n').find((l) => l.trim().startsWith('Body-clock shift vs baseline')) ?? '';
+    const cells = metricsRow.trim().split(/\s{2,}/).slice(1);
+    signs.set('briefing, metrics table', directionOfShift(/\(([+−][\d.]+)\)/.exec(cells[1] ?? '')?.[1] ?? ''));
+    const rangesRow = sectionText(a4, 'Ranges across models and people', 'Methods and assumptions').split('\n').find((l) => l.trim().startsWith('Bright light early')) ?? '';
+    signs.set('briefing, ranges', directionOfShift(/[+−]\d\.\d\d/.exec(rangesRow)?.[0] ?? ''));
+    expect(Object.fromEntries(signs)).toEqual(Object.fromEntries([...signs.keys()].map((k) => [k, 'later'])));
+    // and the convention is stated once, in the methods
+    expect(text.replace(/\s+/g, ' ').split(PHASE_SHIFT_CONVENTION).length - 1).toBe(1);
+  });
+
+  it('cites every model once, exactly as the model registry does, and no paper of a model with another journal', () => {
+    // in reading order, so that a citation wrapped inside a table cell reads as one
+    const text = pdfText(a4, undefined, 'raw').replace(/-\n(?=\d)/g, '-').replace(/\s+/g, ' ');
+    for (const m of reportModels(results)) expect(text.split(m.citation).length - 1, m.name).toBe(1);
+    for (const p of Object.values(PAPERS)) {
+      // a paper cited with its authors, year and a journal has its own journal (the two St Hilaire et al. 2007 papers stay apart);
+      // authors and year without a journal are a model's name ("… (Åkerstedt & Folkard 1997) KSS")
+      const cited = text.split(`${p.authors} ${p.year},`).slice(1);
+      for (const after of cited) expect(after.startsWith(` ${p.journal}`), `${p.authors} ${p.year},${after.slice(0, 30)}`).toBe(true);
+      const surname = p.authors.split(/[ ,]/)[0] ?? '';
+      // every place a paper's first author and year are followed by a journal names the registry's journal
+      for (const m of text.matchAll(new RegExp(`${surname}[^;()]{0,90}?${p.year}[,)]?\\s+\\(?((?:J|Chronobiol|PLoS|Aviat|Science|Solar)[A-Za-z ]*?)\\s\\d`, 'g'))) {
+        const journals = Object.values(PAPERS).filter((q) => q.authors.startsWith(surname) && q.year === p.year).map((q) => q.journal.replace(/\s\d.*$/, ''));
+        expect(journals, m[0]).toContain(m[1]);
+      }
+    }
+  });
+
+  it('leaves no page less than about a third full except where a section ends', () => {
+    const fills = pageFills(a4);
+    const headings = ['Summary and recommendation', 'What was modelled', ...results.personas.map((p) => `Results: ${p.name}`), 'Ranges across models and people', 'Methods and assumptions', 'How these numbers were checked', 'Cautions'];
+    fills.forEach((f, i) => {
+      const next = fills[i + 1];
+      const endsSection = next === undefined || headings.includes(next.firstLine.trim());
+      if (!endsSection) expect(f.fill, `page ${f.page} (next starts “${next?.firstLine ?? ''}”)`).toBeGreaterThan(1 / 3);
+    });
+    // "How these numbers were checked" is one page: the page after it starts the cautions
+    const checked = fills.findIndex((f) => f.firstLine.trim() === 'How these numbers were checked');
+    expect(fills[checked + 1]?.firstLine.trim()).toBe('Cautions');
+  });
+
+  it('names the scenario as the PDF’s title and subject and Zeitlight as its creator', () => {
+    const info = pdfInfo(a4);
+    expect(info.Title).toBe(`${DEMO_SCENARIO.name} — lighting and body-clock briefing`);
+    expect(info.Subject).toBe(DEMO_SCENARIO.name);
+    expect(info.Creator).toBe(`Zeitlight ${VERSION}`);
+    expect(info.Producer).not.toMatch(/Mozilla|HeadlessChrome/);
+  });
+
+  it('prints every value of each person’s metrics table as results.json gives it, to the decimals shown', () => {
+    const view = viewFromResults(results, []);
+    results.personas.forEach((p, k) => {
+      const next = results.personas[k + 1];
+      const section = sectionText(a4, `Results: ${p.name}`, next === undefined ? 'Ranges across models and people' : `Results: ${next.name}`).split('\n');
+      const runs = view.runs.filter((r) => r.personaId === p.id);
+      const strategies = view.strategies.filter((s) => runs.some((r) => r.strategyId === s.id));
+      for (const row of comparisonRows(runs, strategies, view.baselineId)) {
+        // the row's first line: it starts with the label and has a cell per strategy
+        const cellsOf = (l: string) => l.trim().split(/\s{2,}/).slice(1);
+        const line = section.find((l) => l.trim().startsWith(row.label.slice(0, 22)) && cellsOf(l).length === strategies.length);
+        expect(line, `${p.name}: ${row.label}`).toBeDefined();
+        const printed = cellsOf(line ?? '').map((c) => c.replace(/\s*\(.*\)$/, ''));
+        expect(printed, `${p.name}: ${row.label}`).toEqual(row.cells.map((c) => formatMetricValue(row, c.value)));
+      }
+    });
+  });
+
+  it('gives each strategy’s body-clock shift range across the models as results.json has it', () => {
+    const ranges = sectionText(a4, 'Ranges across models and people', 'Methods and assumptions').split('\n');
+    for (const p of results.personas) {
+      for (const s of p.strategies.filter((x) => !x.is_baseline)) {
+        const e = s.ensemble?.mean_phase_shift_h;
+        if (e === undefined || e.min === null || e.max === null) continue;
+        const lo = signedShift(e.min);
+        const hi = signedShift(e.max);
+        if (lo === hi) continue;
+        expect(ranges.some((l) => l.includes(`${lo} to ${hi}`)), `${p.name}, ${s.name}: ${lo} to ${hi}`).toBe(true);
+      }
+    }
+  });
+
+  it('shows the office retrofit’s effect at the deep desk and names the two desks’ difference beside its recommendation', () => {
+    const deep = results.personas.find((p) => p.id === 'deep-desk-worker');
+    const day = (id: string) => deep?.strategies.find((s) => s.id === id)?.summary.mean_daytime_hours_ge_250_lx ?? NaN;
+    expect(day('office-tunable-white') - day('baseline')).toBeGreaterThan(0.5);
+    const summary = sectionText(a4, 'Summary and recommendation', 'What was modelled').replace(/\s+/g, ' ');
+    const block = summary.slice(summary.indexOf(deep!.name));
+    expect(block).toMatch(/Tove Arnhelm and Jonas Brenner work in the same room at desks 2 m and 15 m from the windows\./);
+    expect(block).toMatch(/“Tunable white: brighter day, warmer afternoon” gives \d h \d\d min a day more for Jonas Brenner and about the same for Tove Arnhelm/);
   });
 });

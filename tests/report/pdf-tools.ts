@@ -13,9 +13,10 @@ export function popplerAvailable(): boolean {
   }
 }
 
-export function pdfText(file: string, page?: number): string {
+/** The text of the PDF (or one page): laid out as on the page, or in the order it was written ("raw"). */
+export function pdfText(file: string, page?: number, mode: 'layout' | 'raw' = 'layout'): string {
   const range = page === undefined ? [] : ['-f', String(page), '-l', String(page)];
-  return execFileSync('pdftotext', ['-layout', ...range, file, '-'], { encoding: 'utf8' });
+  return execFileSync('pdftotext', [`-${mode}`, ...range, file, '-'], { encoding: 'utf8' });
 }
 
 export function pdfInfo(file: string): Record<string, string> {

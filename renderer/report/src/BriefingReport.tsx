@@ -23,7 +23,7 @@ export function BriefingReport({ data, records, checked }: { data: ReportData; r
         return <PersonaResults key={s.persona.id} view={view} summary={s} nightly={data.nightly} day={day} />;
       })}
       <RangesSection doc={doc} view={view} />
-      <Methods models={data.models} />
+      <Methods models={data.models} rule={summaries[0]?.rule ?? ''} />
       <Checked page={checked} records={records} />
       <ClosingCautions />
     </main>

@@ -43,7 +43,7 @@ describe('model ensemble in the briefing', () => {
 
   it('lists every ensemble model once on the methods page with its one citation from the model registry, the defaults marked as giving the figures', () => {
     const models = reportModels(results);
-    const html = renderToStaticMarkup(createElement(Methods, { models })).replace(/&amp;/g, '&');
+    const html = renderToStaticMarkup(createElement(Methods, { models, rule: 'The rule.' })).replace(/&amp;/g, '&');
     for (const m of results.ensemble?.models ?? []) {
       const citation = m.role === 'body clock' ? pacemakerCitation(m.id as PacemakerId) : sleepinessCitation(m.id as SleepinessModelId);
       expect(html.split(citation).length - 1, m.id).toBe(1);

@@ -4,9 +4,8 @@
 // computed from the CIE tables).
 
 export const UNIT_NOTES: readonly string[] = [
-  'Light at the eye is kept as melanopic EDI (lx) for each source — daylight, electric light, screens, outdoors — until the last step.',
+  'Light at the eye is kept as melanopic EDI (lx) for each source — daylight, electric light, screens, outdoors — until the last step; asleep, the models read the light that passes the closed eyelids.',
   'The body-clock models were fitted to photopic lux of cool-white fluorescent light; melanopic EDI is converted once: model lux = melanopic EDI ÷ 0.569, the melanopic DER of CIE illuminant FL2.',
-  'Asleep, the models read the light that passes the closed eyelids.',
   'Times are local clock times at the site; the run follows the daylight-saving changes of the site’s time zone.',
   'DLMO, the dim-light melatonin onset, is the evening time at which melatonin would rise above 10 pg/mL in dim light; CBTmin is the time of the body’s temperature low. Both mark where the body clock stands.',
   'KSS is the Karolinska Sleepiness Scale from 1 (extremely alert) to 9 (very sleepy); 7 or more (“sleepy, but no effort to keep awake”) counts as sleepy.',

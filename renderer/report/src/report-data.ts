@@ -28,14 +28,18 @@ export interface ReportData {
   readonly models: readonly ReportModel[];
   /** What the run rests on (results written before it existed have none). */
   readonly basis: RunBasis | undefined;
-  /** For people who work in one room at different desks: the comparison sentence, by persona id. */
+  /** For people who work in one room at different desks: the comparison sentence, by the id of the person at the desk farther from the windows. */
   readonly seatNotes: ReadonlyMap<string, string>;
   readonly warnings: readonly string[];
 }
 
 function seatNotesOf(scenario: unknown, results: RunResults): Map<string, string> {
   const out = new Map<string, string>();
-  for (const c of seatComparisons(scenario as ScenarioInput, results)) for (const id of c.personaIds) out.set(id, c.sentence);
+  // said once, under the recommendation for the desk farther from the windows
+  for (const c of seatComparisons(scenario as ScenarioInput, results)) {
+    const far = c.personaIds[c.personaIds.length - 1];
+    if (far !== undefined) out.set(far, c.sentence);
+  }
   return out;
 }
 

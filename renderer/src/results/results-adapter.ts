@@ -2,6 +2,7 @@
 // through schedules/run (pure, so it runs in the Web Worker) and maps its results to the
 // renderer's ResultsView. When the results format changes, only this file changes.
 import type { Scenario } from '../../../schedules/schema/scenario-types.js';
+import { PHASE_SHIFT_SIGN_LABEL } from '../../../schedules/words/shift-sign.js';
 import { runScenario, RunInputError, RUN_CAUTION, type RunOutput, type StrategyResult, type TimelineLight } from '../../../schedules/run/index.js';
 import { alignmentClause, shortPersonName } from '../../../schedules/run/phase-words.js';
 import type { LightSourceSeries, MetricValue, ResultsView, RunView, SourceKind } from './view-model.js';
@@ -64,7 +65,7 @@ function metricsOf(s: StrategyResult): MetricValue[] {
   return [
     { ...metric('dlmo', 'DLMO (last day, local clock)', 'h', lastDayClock(s.days, 'dlmo_local', true), 2, 'none', 'later', 'earlier'), clock: true },
     { ...metric('cbtmin', 'CBTmin (last day, local clock)', 'h', lastDayClock(s.days, 'cbtmin_local', false), 2, 'none', 'later', 'earlier'), clock: true },
-    metric('phase-shift', 'Body-clock shift vs baseline (last 7 days)', 'h', m.mean_phase_shift_h, 2, 'none', 'later', 'earlier'),
+    metric('phase-shift', `Body-clock shift vs baseline, last 7 days (${PHASE_SHIFT_SIGN_LABEL})`, 'h', m.mean_phase_shift_h, 2, 'none', 'later', 'earlier'),
     metric('misalignment', 'Misalignment with work and sleep hours (mean per day)', 'h', s.alignment?.misalignment_h_per_day ?? null, 1, 'lower', 'more', 'less'),
     metric('day-above-250', 'Daytime hours ≥ 250 lx mEDI (mean per day)', 'h', m.mean_daytime_hours_ge_250_lx, 1, 'higher', 'more', 'fewer'),
     metric('pre-sleep', 'Light in the 3 h before sleep (mean mEDI)', 'lx', m.mean_pre_sleep_mel_edi_lx, 1, 'lower'),

@@ -27,7 +27,7 @@ function RangeCell({ m, isBaseline }: { m: MetricValue | undefined; isBaseline: 
   return (
     <td className="num">
       {shown(m, m.value)}
-      {e !== undefined && e.models > 1 && <span className="ensemble-range">{lo === hi ? `same in all ${e.models}` : `${lo} to ${hi}`}</span>}
+      {e !== undefined && e.models > 1 && <span className="ensemble-range">{lo === hi ? 'all agree' : `${lo} to ${hi}`}</span>}
     </td>
   );
 }
@@ -55,7 +55,7 @@ function ModelRanges({ view }: { view: ResultsView }) {
     <>
       <h3>Across published models</h3>
       <p className="small">
-        The same light at the eye was run through {ensembleModelsWords(e)} (named under Methods). Each figure is the default models’ value; below it, the lowest to the highest value across the models (“same in all” when they agree at the digits shown). A wide range means the published models disagree for this scenario; it says nothing about how people differ.
+        The same light at the eye was run through {ensembleModelsWords(e)} (named under Methods). Each figure is the default models’ value; below it, the lowest to the highest value across the models (“all agree” when they give the same value at the digits shown). A wide range means the published models disagree for this scenario; it says nothing about how people differ.
       </p>
       {view.personas.map((p) => {
         const runs = view.runs.filter((r) => r.personaId === p.id);

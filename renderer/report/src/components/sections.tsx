@@ -145,12 +145,6 @@ export function Summary({ summaries, warnings, basis, seatNotes = new Map() }: {
           <HeadlineTable summary={s} />
         </div>
       ))}
-      <div className="keep">
-        <h4>How the recommendation is chosen</h4>
-        <p className="small muted">
-          {summaries[0]?.rule ?? ''} A body-clock shift counts as good or bad only by whether it moves the clock toward or away from alignment with the person’s work and sleep hours (misalignment: hours a day of work in the biological night, main sleep in the biological day and waking before the biological night is over; the biological night runs from the evening rise of melatonin to 2 h after the body’s temperature low).
-        </p>
-      </div>
       {notes.length > 0 && (
         <div className="keep">
           <h4>Notes from the run</h4>
@@ -241,37 +235,23 @@ export function Modelled({ facts, basis, site }: { facts: ScenarioFacts; basis?:
   );
 }
 
-export function Methods({ models }: { models: readonly ReportModel[] }) {
+export function Methods({ models, rule }: { models: readonly ReportModel[]; rule: string }) {
   return (
     <Section id="methods" title="Methods and assumptions">
-      <h3>Models</h3>
-      <p className="small">The figures in this briefing come from the models marked “figures”; the others are run on the same light at the eye to give the ranges across published models.</p>
+      <div className="keep">
+        <h3>How the recommendation is chosen</h3>
+        <p className="small">
+          {rule} A body-clock shift counts only by whether it moves the clock toward or away from alignment with the person’s work and sleep hours; the biological night runs from the evening rise of melatonin to 2 h after the body’s temperature low.
+        </p>
+      </div>
+      <h3>Models and published methods</h3>
+      <p className="small">The figures in this briefing come from the models and methods marked “figures”; the models marked “range” are run on the same light at the eye to give the ranges across published models.</p>
       <table className="data keep small-table models">
         <thead>
           <tr>
             <th>Part</th>
-            <th>Model</th>
+            <th>Model or method</th>
             <th>Used for</th>
-            <th>Published in</th>
-          </tr>
-        </thead>
-        <tbody>
-          {models.map((m) => (
-            <tr key={`${m.part}:${m.name}`}>
-              <td>{m.part}</td>
-              <td>{m.name}</td>
-              <td>{m.use === 'figures' ? 'figures' : 'range'}</td>
-              <td>{m.citation}</td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-      <h3>Light and thresholds</h3>
-      <table className="data keep small-table methods">
-        <thead>
-          <tr>
-            <th>Part</th>
-            <th>Method</th>
             <th>Published in</th>
           </tr>
         </thead>
@@ -280,7 +260,16 @@ export function Methods({ models }: { models: readonly ReportModel[] }) {
             <tr key={m.part}>
               <td>{m.part}</td>
               <td>{m.method}</td>
+              <td>figures</td>
               <td>{m.reference}</td>
+            </tr>
+          ))}
+          {models.map((m) => (
+            <tr key={`${m.part}:${m.name}`}>
+              <td>{m.part}</td>
+              <td>{m.name}</td>
+              <td>{m.use === 'figures' ? 'figures' : 'range'}</td>
+              <td>{m.citation}</td>
             </tr>
           ))}
         </tbody>
