@@ -15,7 +15,7 @@ describe('source responses at the eye', () => {
     expect(daylightResponse(6500, 15).lensFactor).toBeGreaterThan(1);
   });
 
-  test('a warm LED has a lower melanopic DER than a cool one (CIE S 026 toolbox: 2700 K LED about 0.4–0.5, 6500 K about 0.8–1.0, common practice)', () => {
+  test('a warm LED has a lower melanopic DER than a cool one (CIE S 026 α-opic quantities: 2700 K LED about 0.4–0.5, 6500 K about 0.8–1.0, common practice)', () => {
     const warm = electricResponse({ kind: 'cct', cct_K: 2700 }, undefined, 32).melDer;
     const cool = electricResponse({ kind: 'cct', cct_K: 6500 }, undefined, 32).melDer;
     expect(warm).toBeGreaterThan(0.3);
