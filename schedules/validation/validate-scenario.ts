@@ -15,6 +15,7 @@ import type { Scenario } from '../schema/scenario-types.js';
 import { formatPath, problem, type ScenarioProblem } from './problem.js';
 import { repairForChecks } from './repair-for-checks.js';
 import { jsonErrorOffset, positionAt } from './json-error-position.js';
+import { cutDeepNesting, MAX_NESTING_DEPTH } from './nesting-depth.js';
 import { schemaProblems } from './zod-problems.js';
 import { referenceChecks, type SetAsideIds } from './sense/reference-checks.js';
 import { siteChecks } from './sense/site-checks.js';
@@ -224,7 +225,15 @@ function wholeScenario(scenario: Scenario): CheckableParts {
 }
 
 /** Validates an already-parsed JSON value. */
-export function validateScenarioValue(input: unknown): ScenarioValidation {
+export function validateScenarioValue(value: unknown): ScenarioValidation {
+  const nesting = cutDeepNesting(value);
+  if (nesting.cut.length === 0) return validateShallowValue(value);
+  const v = validateShallowValue(nesting.value);
+  const deep = nesting.cut.map((p) => problem('error', p, `nested more than ${MAX_NESTING_DEPTH} levels deep`, 'A scenario nests about ten levels; replace this part with the value the format asks for here.'));
+  return { ...v, ok: false, scenario: undefined, problems: [...deep, ...v.problems] };
+}
+
+function validateShallowValue(input: unknown): ScenarioValidation {
   let migrated = migrateScenario(input);
   const identity: ScenarioProblem[] = [];
   if (migrated.problems.length > 0) {

@@ -33,7 +33,8 @@ type StructuralChange =
   | { kind: 'delete'; pick: number }
   | { kind: 'replace'; pick: number; value: Json }
   | { kind: 'duplicate-id'; list: 'places' | 'personas' | 'strategies' | 'rosters' }
-  | { kind: 'unknown-reference'; pick: number };
+  | { kind: 'unknown-reference'; pick: number }
+  | { kind: 'deep-text'; depth: number };
 
 const structuralArb: fc.Arbitrary<StructuralChange> = fc.oneof(
   { weight: 1, arbitrary: fc.constant<StructuralChange>({ kind: 'none' }) },
@@ -41,6 +42,7 @@ const structuralArb: fc.Arbitrary<StructuralChange> = fc.oneof(
   { weight: 6, arbitrary: fc.record({ pick: fc.nat(), value: hardValueArb }).map((r): StructuralChange => ({ kind: 'replace', ...r })) },
   { weight: 1, arbitrary: fc.constantFrom('places', 'personas', 'strategies', 'rosters').map((list): StructuralChange => ({ kind: 'duplicate-id', list: list as 'places' })) },
   { weight: 1, arbitrary: fc.nat().map((pick): StructuralChange => ({ kind: 'unknown-reference', pick })) },
+  { weight: 1, arbitrary: fc.constantFrom(100, 20_000, 200_000).map((depth): StructuralChange => ({ kind: 'deep-text', depth })) },
 );
 
 export interface ScenarioCase {
@@ -69,6 +71,7 @@ function applyStructural(input: Json, change: StructuralChange): Json {
   const paths = allPaths(doc).slice(1);
   switch (change.kind) {
     case 'none':
+    case 'deep-text':
       return doc;
     case 'delete':
     case 'replace': {
@@ -151,7 +154,10 @@ export function scenarioTarget(dir: string): FuzzTarget<ScenarioCase> {
     arbitrary: scenarioCaseArb,
     async run(c) {
       const doc = applyStructural(c.doc, c.change);
-      const text = applyTextCorruption(JSON.stringify(doc, null, 1), c.text);
+      let json = JSON.stringify(doc, null, 1);
+      // Nesting deeper than JSON.stringify can write is made in the text itself.
+      if (c.change.kind === 'deep-text') json = json.replace(/^\{/, `{ "description": ${'{"a":'.repeat(c.change.depth)}[]${'}'.repeat(c.change.depth)},`);
+      const text = applyTextCorruption(json, c.text);
       writeFileSync(file, encodeText(text, c.text.encoding));
       const findings: Finding[] = [];
       if (c.command === 'run') {
