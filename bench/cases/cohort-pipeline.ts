@@ -16,15 +16,15 @@
  */
 import { availableParallelism } from 'node:os';
 import { runCohorts } from '../../cli/run-output/cohort-runs.js';
-import { DEMO_SCENARIO } from '../../schedules/index.js';
+import { demoPart } from '../../schedules/demo/demo-part.js';
 import { validateScenarioValue } from '../../schedules/validation/validate-scenario.js';
 
 const SIZE = Number(process.env['ZEITLIGHT_BENCH_COHORT_SIZE'] ?? 1000);
 const REPEATS = Math.max(1, Number(process.env['ZEITLIGHT_BENCH_COHORT_REPEATS'] ?? 1));
 
 function benchScenario() {
-  const strategies = (DEMO_SCENARIO.strategies ?? []).filter((s) => s.personas?.includes('desk-worker')).slice(0, 3);
-  const v = validateScenarioValue({ ...DEMO_SCENARIO, run: { startDate: '2026-03-23', days: 14 }, personas: DEMO_SCENARIO.personas.filter((p) => p.id === 'desk-worker'), strategies, rosters: [] });
+  const desk = demoPart(['desk-worker']);
+  const v = validateScenarioValue({ ...desk, run: { startDate: '2026-03-23', days: 14 }, strategies: (desk.strategies ?? []).slice(0, 3) });
   if (v.scenario === undefined) throw new Error('cohort bench scenario is invalid');
   return v.scenario;
 }
