@@ -87,7 +87,7 @@ function HeadlineTable({ summary }: { summary: PersonaSummary }) {
           </th>
           <th className="num">Misalignment with work and sleep (h a day)</th>
           <th className="num">Melatonin suppression per night</th>
-          <th className="num">{summary.basis === 'work' ? 'Work hours' : 'Waking hours'} at KSS 7 or more</th>
+          <th className="num">Sleepy {summary.basis === 'work' ? 'work' : 'waking'} hours (KSS ≥ 7)</th>
         </tr>
       </thead>
       <tbody>
