@@ -31,8 +31,11 @@ export function crashFindings(call: CliCall): Finding[] {
   return out;
 }
 
-/** A place in a file: a line, a column, a field path, or the whole file named as such. */
-const PLACE = /\bline \d+|\bcolumn "|\b(?:run|site|places|personas|rosters|strategies|lightLogs|format|version|name|description)\b(?:[.[]|\b)|--[a-z][\w-]*|whole file|\bis empty\b|\bno such file\b|\bit is a folder\b|\bpermission denied\b|\bis \d[\d.,]* MB, more than\b/;
+/**
+ * A place in a file: a line, a column, a field path (a scenario section, a problem listed as
+ * `error: <path>: …`, or `the first is at <path>`), an option, or the whole file named as such.
+ */
+const PLACE = /\bthe first is at (?!\(file\))\S+|^\s*error: (?!\(file\))[^\s:]+: |\bline \d+|\bcolumn "|\b(?:run|site|places|personas|rosters|strategies|lightLogs|format|version|name|description)\b(?:[.[]|\b)|--[a-z][\w-]*|whole file|\bis empty\b|\bno such file\b|\bit is a folder\b|\bpermission denied\b|\bis \d[\d.,]* MB, more than\b/;
 
 /**
  * Whether a refusal is located: it names one of the files (by base name) and a place in it — or,
@@ -42,7 +45,7 @@ export function locatedRefusal(message: string, files: readonly string[]): boole
   if (/^zeitlight( \w+)?: (unknown command|expected |--|zeitlight \w+ takes no file|unknown option|option )/m.test(message)) return true;
   if (/\busage: zeitlight /.test(message) && /(--[a-z]|argument|option|positional)/i.test(message)) return true;
   const namesFile = files.length === 0 || files.some((f) => message.includes(f));
-  return namesFile && PLACE.test(message);
+  return namesFile && new RegExp(PLACE.source, 'm').test(message);
 }
 
 export function refusalFindings(call: CliCall, files: readonly string[]): Finding[] {

@@ -14,7 +14,7 @@ export const FUZZ_SEED = 20261205;
 export const FUZZ_CASES: Readonly<Record<string, number>> = { scenario: 3000, 'light-log': 2000, epw: 1500, spectrum: 1500, sleep: 1000, args: 1500 };
 
 /** Cases per target in the sample that `npm test` runs. */
-export const SAMPLE_CASES: Readonly<Record<string, number>> = { scenario: 60, 'light-log': 40, epw: 30, spectrum: 30, sleep: 10, args: 40 };
+export const SAMPLE_CASES: Readonly<Record<string, number>> = { scenario: 40, 'light-log': 40, epw: 30, spectrum: 30, sleep: 10, args: 40 };
 
 export function fuzzTargets(dir: string): FuzzTarget<never>[] {
   return [scenarioTarget(dir), lightLogTarget(dir), epwTarget(dir), spectrumTarget(dir), sleepTarget(dir), argsTarget(dir)] as unknown as FuzzTarget<never>[];
