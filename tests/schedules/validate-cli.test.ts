@@ -32,7 +32,7 @@ describe('zeitlight validate', () => {
     const r = await run([write('demo.json', DEMO_SCENARIO)], true);
     expect(r.code).toBe(0);
     const doc = JSON.parse(r.out) as { valid: boolean; errors: number; problems: unknown[]; summary: { personas: number } };
-    expect(doc).toMatchObject({ valid: true, errors: 0, problems: [], summary: { personas: 2 } });
+    expect(doc).toMatchObject({ valid: true, errors: 0, problems: [], summary: { personas: 3 } });
     expect(r.err).toBe('');
   });
 
