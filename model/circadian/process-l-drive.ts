@@ -22,7 +22,7 @@ import { lightActivation_per_min, type ProcessLParams } from './process-l.js';
 
 const MINUTE_H = 1 / 60;
 
-/** E1 = (1 − e^{−x})/λ·… in the stable forms used below: returns [E1, E2] for rate λ and length Δ. */
+/** [E1, E2] = [∫₀^Δ e^{−λs} ds, ∫₀^Δ s·e^{−λs} ds] for rate λ (h⁻¹) and length Δ (h), by series when λΔ is small. */
 function relaxationIntegrals(lambda: number, delta: number): [number, number] {
   const x = lambda * delta;
   if (x < 1e-3) {
