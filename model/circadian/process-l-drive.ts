@@ -22,19 +22,24 @@ import { lightActivation_per_min, type ProcessLParams } from './process-l.js';
 
 const MINUTE_H = 1 / 60;
 
-/** [E1, E2] = [∫₀^Δ e^{−λs} ds, ∫₀^Δ s·e^{−λs} ds] for rate λ (h⁻¹) and length Δ (h), by series when λΔ is small. */
-function relaxationIntegrals(lambda: number, delta: number): [number, number] {
+/**
+ * Relaxation integrals of one piece, for rate λ (h⁻¹) and length Δ (h): E1 = ∫₀^Δ e^{−λs} ds,
+ * E2 = ∫₀^Δ s·e^{−λs} ds and the decay e^{−λΔ}; by series when λΔ is small. Written into `out`
+ * (no allocation per piece: this runs for every minute of measured light).
+ */
+function relaxationIntegrals(lambda: number, delta: number, out: { e1: number; e2: number; decay: number }): void {
   const x = lambda * delta;
   if (x < 1e-3) {
     // Series: E1 = Δ(1 − x/2 + x²/6 − x³/24), E2 = Δ²(1/2 − x/3 + x²/8 − x³/30).
-    const e1 = delta * (1 - x / 2 + (x * x) / 6 - (x * x * x) / 24);
-    const e2 = delta * delta * (0.5 - x / 3 + (x * x) / 8 - (x * x * x) / 30);
-    return [e1, e2];
+    out.e1 = delta * (1 - x / 2 + (x * x) / 6 - (x * x * x) / 24);
+    out.e2 = delta * delta * (0.5 - x / 3 + (x * x) / 8 - (x * x * x) / 30);
+    out.decay = Math.exp(-x);
+    return;
   }
   const decay = Math.exp(-x);
-  const e1 = -Math.expm1(-x) / lambda;
-  const e2 = (e1 - delta * decay) / lambda;
-  return [e1, e2];
+  out.e1 = (1 - decay) / lambda;
+  out.e2 = (out.e1 - delta * decay) / lambda;
+  out.decay = decay;
 }
 
 export class ProcessLDrive implements Drive {
@@ -43,6 +48,10 @@ export class ProcessLDrive implements Drive {
   /** Result of the last `moments` call, reused when `advance` goes to the same time. */
   private lastEnd = Number.NaN;
   private lastN = Number.NaN;
+  /** Scratch of the piece look-up and the relaxation integrals (hot loop, no allocation). */
+  private pieceEnd = 0;
+  private pieceAlpha = 0;
+  private readonly relax = { e1: 0, e2: 0, decay: 1 };
 
   constructor(
     private readonly params: ProcessLParams,
@@ -73,25 +82,22 @@ export class ProcessLDrive implements Drive {
     return p === undefined ? t : t - p * Math.floor((t + 1e-12) / p);
   }
 
-  /** α (min⁻¹) of the light just after time t. */
-  private activationAt(t: number): number {
-    const tr = this.readOffset(t);
-    const i = segmentIndexAt(this.light, tr);
-    const f = this.light.smooth?.[i];
-    const level = f === undefined ? (this.light.level[i] as number) : Math.max(0, f(tr + 0.5 * MINUTE_H));
-    return lightActivation_per_min(this.params, this.gain * level);
-  }
-
-  /** End of the constant piece that starts at t (next breakpoint, minute end for smooth pieces), capped at tEnd. */
-  private pieceEnd(t: number, tEnd: number): number {
+  /**
+   * The constant piece that starts at t: its end (next breakpoint, the minute's end for a smooth
+   * piece, the period's end; capped at tEnd) and α (min⁻¹) of its light, from one look-up.
+   */
+  private piece(t: number, tEnd: number): void {
     const tr = this.readOffset(t);
     const s = this.light.start_h;
     const i = segmentIndexAt(this.light, tr);
+    const f = this.light.smooth?.[i];
+    const level = f === undefined ? (this.light.level[i] as number) : Math.max(0, f(tr + 0.5 * MINUTE_H));
     let next = i + 1 < s.length ? (s[i + 1] as number) : Number.POSITIVE_INFINITY;
     if (next <= tr) next = Number.POSITIVE_INFINITY;
-    if (this.light.smooth?.[i] !== undefined) next = Math.min(next, tr + MINUTE_H);
+    if (f !== undefined) next = Math.min(next, tr + MINUTE_H);
     if (this.period_h !== undefined) next = Math.min(next, this.period_h);
-    return Math.min(tEnd, t + (next - tr));
+    this.pieceEnd = Math.min(tEnd, t + (next - tr));
+    this.pieceAlpha = lightActivation_per_min(this.params, this.gain * level);
   }
 
   moments(t1: number): DriveMoments {
@@ -103,21 +109,23 @@ export class ProcessLDrive implements Drive {
     let moment = 0;
     let guard = 0;
     while (t < t1) {
-      let end = this.pieceEnd(t, t1);
+      this.piece(t, t1);
+      let end = this.pieceEnd;
       if (!(end > t)) end = Math.min(t1, t + MINUTE_H); // a breakpoint within rounding of t
       const delta = end - t;
-      const alpha = this.activationAt(t);
+      const alpha = this.pieceAlpha;
       if (alpha > 0) {
         const lambda = 60 * (alpha + beta);
         const nInf = alpha / (alpha + beta);
         const c = 1 - nInf;
         const d = nInf - n;
-        const [e1, e2] = relaxationIntegrals(lambda, delta);
+        relaxationIntegrals(lambda, delta, this.relax);
+        const { e1, e2, decay } = this.relax;
         const s0 = t - this.t;
         const ga = P.G_min * alpha;
         integral += ga * (c * delta + d * e1);
         moment += ga * (c * (0.5 * delta * delta + s0 * delta) + d * (s0 * e1 + e2));
-        n = nInf + (n - nInf) * Math.exp(-lambda * delta);
+        n = nInf + (n - nInf) * decay;
       } else {
         n *= Math.exp(-60 * beta * delta);
       }
@@ -137,7 +145,7 @@ export class ProcessLDrive implements Drive {
   }
 
   valueNow(): number {
-    const alpha = this.activationAt(this.t);
-    return this.params.G_min * alpha * (1 - this.n);
+    this.piece(this.t, Number.POSITIVE_INFINITY);
+    return this.params.G_min * this.pieceAlpha * (1 - this.n);
   }
 }
