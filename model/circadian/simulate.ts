@@ -386,14 +386,17 @@ export function simulate(opts: SimulationOptions): SimulationRun {
       if (hclIndex >= 0) dydt[hclIndex] = (hcl.mu * wake - (yq[hclIndex] as number)) / hcl.chi_h;
       return dydt;
     };
-    const piece: ThroughLightPiece = {
-      model,
-      light: lit,
-      gain: sens,
-      ...(periodic ? { period_h: 24 } : {}),
-      size,
-      homeostatRate: hclIndex >= 0 ? (yq) => (hcl.mu * wake - (yq[hclIndex] as number)) / hcl.chi_h : null,
-    };
+    // Only a stretch integrated through light needs it (restarted pieces are many and short).
+    const piece: ThroughLightPiece | null = throughThisPiece
+      ? {
+          model,
+          light: lit,
+          gain: sens,
+          ...(periodic ? { period_h: 24 } : {}),
+          size,
+          homeostatRate: hclIndex >= 0 ? (yq) => (hcl.mu * wake - (yq[hclIndex] as number)) / hcl.chi_h : null,
+        }
+      : null;
     const pair = [0, 0];
     const angleAt = (dense: Dense, tq: number) => {
       pair[0] = dense(0, tq);
@@ -459,7 +462,7 @@ export function simulate(opts: SimulationOptions): SimulationRun {
           const fromPiece = tOld - tPiece <= MARKER_REFINE_MAX_SPAN_H;
           let tm: number;
           let depth: number;
-          if (throughThisPiece) {
+          if (piece !== null) {
             const refined = minimumThroughLight(piece, tOld, yA, tNew, 0);
             tm = refined?.t ?? 0.5 * (lo + hi);
             depth = refined?.value ?? dense(0, tm);
@@ -500,7 +503,7 @@ export function simulate(opts: SimulationOptions): SimulationRun {
 
     const dense = free ? undefined : [0, 1];
     let res;
-    if (throughThisPiece) {
+    if (piece !== null) {
       const through = integrateThroughLight(piece, t, y, tStop, observer, throughLightStep);
       throughLightStep = through.nextStep;
       res = through;
